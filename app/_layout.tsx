@@ -1,5 +1,10 @@
-import { Stack } from 'expo-router';
+import { Slot } from 'expo-router';
+import { AppProviders } from '@/components/app/AppProviders';
 
 export default function RootLayout() {
-  return <Stack screenOptions={{ headerShown: false }} />;
+  return (
+    <AppProviders>
+      <Slot />
+    </AppProviders>
+  );
 }

@@ -1,9 +1,6 @@
-import { Text, View } from 'react-native';
+import { Redirect } from 'expo-router';
 
+/** The app's front door: Designs, where the signed-in layout sends signed-out visitors on to sign-in. */
 export default function Index() {
-  return (
-    <View>
-      <Text>Cablewright</Text>
-    </View>
-  );
+  return <Redirect href="/designs" />;
 }

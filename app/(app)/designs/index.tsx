@@ -1,0 +1,5 @@
+import { DesignsScreen } from '@/components/designs/DesignsScreen';
+
+export default function DesignsRoute() {
+  return <DesignsScreen />;
+}

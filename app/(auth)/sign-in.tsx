@@ -1,0 +1,5 @@
+import { SignInScreen } from '@/components/auth/SignInScreen';
+
+export default function SignInRoute() {
+  return <SignInScreen />;
+}

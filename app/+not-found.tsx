@@ -1,0 +1,5 @@
+import { NotFoundScreen } from '@/components/shell/NotFoundScreen';
+
+export default function NotFoundRoute() {
+  return <NotFoundScreen />;
+}

@@ -1,0 +1,11 @@
+export { Badge, type BadgeTone } from '@/components/ui/Badge';
+export { Banner, type BannerTone } from '@/components/ui/Banner';
+export { Button, type ButtonVariant } from '@/components/ui/Button';
+export { Card } from '@/components/ui/Card';
+export { EmptyState } from '@/components/ui/EmptyState';
+export { Icon, type IconName } from '@/components/ui/icons';
+export { Screen } from '@/components/ui/Screen';
+export { SegmentedPicker, type PickerOption } from '@/components/ui/SegmentedPicker';
+export { Heading, Text } from '@/components/ui/Text';
+export { TextField } from '@/components/ui/TextField';
+export * from '@/components/ui/tokens';
