@@ -6,6 +6,15 @@ beforeAll(() => {
 });
 beforeEach(() => fetchMock.mockReset());
 
+async function rejection(request: Promise<unknown>): Promise<ApiRequestError> {
+  try {
+    await request;
+  } catch (error) {
+    return error as ApiRequestError;
+  }
+  throw new Error('expected the request to fail');
+}
+
 function answer(status: number, body?: unknown) {
   return new Response(body === undefined ? null : JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 }
@@ -22,7 +31,7 @@ describe('the HTTP client', () => {
 
   it('throws ApiRequestError with status, sentence and issues on a 400', async () => {
     fetchMock.mockResolvedValueOnce(answer(400, { error: 'Check the highlighted fields.', issues: [{ path: 'email', message: 'Not an e-mail' }] }));
-    const error: ApiRequestError = await apiRequest('POST', '/api/team/invitations', {}).catch((e: ApiRequestError) => e);
+    const error: ApiRequestError = await rejection(apiRequest('POST', '/api/team/invitations', {}));
     expect(error).toBeInstanceOf(ApiRequestError);
     expect(error.status).toBe(400);
     expect(error.error).toBe('Check the highlighted fields.');
@@ -36,7 +45,7 @@ describe('the HTTP client', () => {
 
   it('reports an unreachable server as status 0 with a sentence a person can act on', async () => {
     fetchMock.mockRejectedValueOnce(new TypeError('Failed to fetch'));
-    const error: ApiRequestError = await apiRequest('GET', '/api/auth/me').catch((e: ApiRequestError) => e);
+    const error: ApiRequestError = await rejection(apiRequest('GET', '/api/auth/me'));
     expect(error.status).toBe(0);
     expect(error.message).toMatch(/could not reach the server/);
   });
