@@ -5,7 +5,6 @@ import { AcceptInvitationForm } from '@/components/auth/AcceptInvitationForm';
 import { Badge, Banner, Button, Card, Heading, Text, colors, space } from '@/components/ui';
 import { roleTone } from '@/components/team/roleTone';
 import { useMe } from '@/lib/api/auth';
-import { isApiRequestError } from '@/lib/api/client';
 import { useInvitationPreview } from '@/lib/api/team';
 import { formatDate, roleLabel } from '@/lib/format';
 
@@ -17,7 +16,7 @@ export function AcceptInvitationScreen({ token }: { token: string }) {
       <Card testID="accept-invitation">
         <Heading level={1}>Join your team</Heading>
         {preview.isPending ? <ActivityIndicator color={colors.primary} /> : null}
-        {preview.isError ? <InvitationUnavailable notFound={isApiRequestError(preview.error) && preview.error.status === 404} message={preview.error.message} /> : null}
+        {preview.isError ? <InvitationUnavailable message={preview.error.message} /> : null}
         {preview.data ? (
           <>
             <View style={styles.facts}>
@@ -59,11 +58,12 @@ function Fact({ label, value, testID }: { label: string; value: string; testID: 
   );
 }
 
-function InvitationUnavailable({ notFound, message }: { notFound: boolean; message: string }) {
+/** The server's own sentence says why (used, withdrawn, expired); the way out is sign-in or a new link. */
+function InvitationUnavailable({ message }: { message: string }) {
   return (
     <>
       <Banner tone="warning" title="This invitation cannot be used" testID="invitation-unavailable">
-        {notFound ? 'It may have expired, been withdrawn, or been used already. Ask your team admin for a new one.' : message}
+        {message}
       </Banner>
       <Link href="/sign-in" asChild>
         <Button label="Go to sign-in" variant="secondary" />
