@@ -1,0 +1,103 @@
+import type { Issue } from '@/shared/api/common';
+import type { Topology } from '@/shared/topology/schema';
+import { iteratePorts } from '@/shared/topology/index';
+
+/**
+ * The checks zod cannot make one value at a time: ids unique across the whole document, cable ends
+ * that are existing and different ports, network references that resolve to networks, switch ports
+ * without networkId or address (a switch carries every network), and layout keys naming devices.
+ */
+type Kind = 'device' | 'controller' | 'card' | 'port' | 'cable' | 'network';
+
+type Owner = { kind: Kind; path: string };
+
+function collectIds(doc: Topology, issues: Issue[]): Map<string, Owner> {
+  const owners = new Map<string, Owner>();
+  const claim = (value: string, kind: Kind, path: string) => {
+    const first = owners.get(value);
+    if (first) {
+      issues.push({
+        path: `${path}.id`,
+        message: `The id "${value}" is already used by the ${first.kind} at ${first.path}; every id must be unique in the document.`,
+      });
+      return;
+    }
+    owners.set(value, { kind, path });
+  };
+  doc.devices.forEach((device, d) => {
+    claim(device.id, 'device', `devices.${d}`);
+    if (device.kind === 'array') {
+      device.controllers.forEach((c, i) => claim(c.id, 'controller', `devices.${d}.controllers.${i}`));
+    } else if (device.kind === 'host') {
+      device.adapters.forEach((a, i) => claim(a.id, 'card', `devices.${d}.adapters.${i}`));
+    }
+  });
+  for (const ref of iteratePorts(doc)) claim(ref.port.id, 'port', ref.path);
+  doc.cables.forEach((cable, i) => claim(cable.id, 'cable', `cables.${i}`));
+  doc.networks.forEach((network, i) => claim(network.id, 'network', `networks.${i}`));
+  return owners;
+}
+
+function checkCables(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
+  doc.cables.forEach((cable, i) => {
+    for (const end of ['a', 'b'] as const) {
+      const target = owners.get(cable[end]);
+      if (!target) {
+        issues.push({ path: `cables.${i}.${end}`, message: `No port has the id "${cable[end]}".` });
+      } else if (target.kind !== 'port') {
+        issues.push({
+          path: `cables.${i}.${end}`,
+          message: `"${cable[end]}" is a ${target.kind}, not a port; a cable end must name a port.`,
+        });
+      }
+    }
+    if (cable.a === cable.b) {
+      issues.push({ path: `cables.${i}.b`, message: 'A cable cannot join a port to itself; its two ends must differ.' });
+    }
+  });
+}
+
+function checkPorts(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
+  for (const ref of iteratePorts(doc)) {
+    const { port, device, path } = ref;
+    if (device.kind === 'switch') {
+      if (port.networkId !== undefined) {
+        issues.push({
+          path: `${path}.networkId`,
+          message: 'A switch port carries every network; remove its network reference.',
+        });
+      }
+      if (port.address !== undefined) {
+        issues.push({ path: `${path}.address`, message: 'A switch port has no address of its own; remove it.' });
+      }
+      continue;
+    }
+    if (port.networkId === undefined) continue;
+    const target = owners.get(port.networkId);
+    if (!target) {
+      issues.push({ path: `${path}.networkId`, message: `No network has the id "${port.networkId}".` });
+    } else if (target.kind !== 'network') {
+      issues.push({
+        path: `${path}.networkId`,
+        message: `"${port.networkId}" is a ${target.kind}, not a network.`,
+      });
+    }
+  }
+}
+
+function checkLayout(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
+  for (const key of Object.keys(doc.layout ?? {})) {
+    if (owners.get(key)?.kind !== 'device') {
+      issues.push({ path: `layout.${key}`, message: `The layout names "${key}", which is not a device of this document.` });
+    }
+  }
+}
+
+export function crossReferenceIssues(doc: Topology): Issue[] {
+  const issues: Issue[] = [];
+  const owners = collectIds(doc, issues);
+  checkCables(doc, owners, issues);
+  checkPorts(doc, owners, issues);
+  checkLayout(doc, owners, issues);
+  return issues;
+}

@@ -1,0 +1,145 @@
+import { z } from 'zod';
+import { isValidCidr } from '@/shared/address/cidr';
+import { isValidIp } from '@/shared/address/ip';
+
+/**
+ * Topology document, format 1 — the executable form of the format page. Only what makes a document
+ * unreadable is rejected here; every drafting mistake is left to the analysis as a finding, so a
+ * draft can always be saved. Cross-references (unique ids, cable ends, network ids) are checked in
+ * validate.ts because zod sees one value at a time.
+ */
+export const TOPOLOGY_FORMAT = 'cablewright.topology/1';
+
+export const PORT_SPEEDS = [1, 2.5, 5, 10, 25, 40, 50, 100] as const;
+export const CONNECTORS = ['rj45', 'sfp'] as const;
+export const MEDIA = ['cat5e', 'cat6', 'cat6a', 'om3', 'om4', 'dac', 'aoc'] as const;
+export const PORT_ROLES = ['data', 'management'] as const;
+export const SWITCH_ROLES = ['data', 'management', 'shared'] as const;
+export const NETWORK_PURPOSES = ['data', 'management'] as const;
+export const CHAP_MODES = ['none', 'one-way', 'mutual'] as const;
+export const DEVICE_KINDS = ['array', 'switch', 'host'] as const;
+
+export type PortSpeed = (typeof PORT_SPEEDS)[number];
+export type Connector = (typeof CONNECTORS)[number];
+export type Media = (typeof MEDIA)[number];
+export type PortRole = (typeof PORT_ROLES)[number];
+export type SwitchRole = (typeof SWITCH_ROLES)[number];
+export type NetworkPurpose = (typeof NETWORK_PURPOSES)[number];
+export type ChapMode = (typeof CHAP_MODES)[number];
+
+const id = z.string().min(1, 'must not be empty').max(200, 'must be at most 200 characters');
+const name = z.string().max(200, 'must be at most 200 characters');
+const rack = z.string().max(100, 'must be at most 100 characters').optional();
+const ru = z.number().int().min(1).max(100).optional();
+
+export const addressSchema = z.discriminatedUnion('mode', [
+  z
+    .object({
+      mode: z.literal('static'),
+      ip: z.string().refine(isValidIp, 'is not an IPv4 or IPv6 address (no prefix length here)'),
+    })
+    .strict(),
+  z.object({ mode: z.literal('dhcp') }).strict(),
+]);
+
+export const portSchema = z
+  .object({
+    id,
+    name,
+    role: z.enum(PORT_ROLES),
+    speedGbps: z.union(PORT_SPEEDS.map((speed) => z.literal(speed))),
+    connector: z.enum(CONNECTORS),
+    networkId: id.optional(),
+    address: addressSchema.optional(),
+  })
+  .strict();
+
+export const controllerSchema = z.object({ id, name, ports: z.array(portSchema) }).strict();
+export const adapterSchema = z.object({ id, name, ports: z.array(portSchema) }).strict();
+
+export const arraySchema = z
+  .object({
+    id,
+    kind: z.literal('array'),
+    name,
+    controllers: z.array(controllerSchema).min(1).max(4),
+    rack,
+    ru,
+  })
+  .strict();
+
+export const switchSchema = z
+  .object({
+    id,
+    kind: z.literal('switch'),
+    name,
+    role: z.enum(SWITCH_ROLES),
+    ports: z.array(portSchema),
+    rack,
+    ru,
+  })
+  .strict();
+
+export const hostSchema = z
+  .object({
+    id,
+    kind: z.literal('host'),
+    name,
+    iqn: z.string().max(1000).optional(),
+    adapters: z.array(adapterSchema),
+    rack,
+    ru,
+  })
+  .strict();
+
+export const deviceSchema = z.discriminatedUnion('kind', [arraySchema, switchSchema, hostSchema]);
+
+export const cableSchema = z
+  .object({
+    id,
+    label: z.string().max(100).optional(),
+    a: id,
+    b: id,
+    media: z.enum(MEDIA),
+    lengthM: z.number().positive().max(100000).optional(),
+  })
+  .strict();
+
+export const networkSchema = z
+  .object({
+    id,
+    name,
+    purpose: z.enum(NETWORK_PURPOSES),
+    cidr: z.string().refine(isValidCidr, 'is not a CIDR block such as 198.51.100.0/24 or 2001:db8::/64'),
+    vlan: z.number().int().optional(),
+    mtu: z.number().int().optional(),
+    gateway: z.string().refine(isValidIp, 'is not an IPv4 or IPv6 address').optional(),
+  })
+  .strict();
+
+export const positionSchema = z.object({ x: z.number(), y: z.number() }).strict();
+
+export const topologySchema = z
+  .object({
+    format: z.literal(TOPOLOGY_FORMAT),
+    name,
+    devices: z.array(deviceSchema),
+    cables: z.array(cableSchema),
+    networks: z.array(networkSchema),
+    security: z.object({ chap: z.enum(CHAP_MODES) }).strict().optional(),
+    layout: z.record(z.string(), positionSchema).optional(),
+  })
+  .strict();
+
+export type Topology = z.infer<typeof topologySchema>;
+export type Device = z.infer<typeof deviceSchema>;
+export type ArrayDevice = z.infer<typeof arraySchema>;
+export type SwitchDevice = z.infer<typeof switchSchema>;
+export type HostDevice = z.infer<typeof hostSchema>;
+export type Controller = z.infer<typeof controllerSchema>;
+export type Adapter = z.infer<typeof adapterSchema>;
+export type Port = z.infer<typeof portSchema>;
+export type Cable = z.infer<typeof cableSchema>;
+export type Network = z.infer<typeof networkSchema>;
+export type Address = z.infer<typeof addressSchema>;
+export type Position = z.infer<typeof positionSchema>;

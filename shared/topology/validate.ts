@@ -1,0 +1,38 @@
+import type { Issue } from '@/shared/api/common';
+import { crossReferenceIssues } from '@/shared/topology/crossref';
+import { describeZodIssues } from '@/shared/topology/messages';
+import { topologySchema, type Topology } from '@/shared/topology/schema';
+
+/**
+ * The gate every uploaded or edited document passes: zod for shape, then cross-references.
+ * It never throws — the server feeds it whatever a user sends — and it caps the list at
+ * MAX_ISSUES so a million bad entries cannot become a million-line answer; the last issue then
+ * says how many more there were.
+ */
+export const MAX_ISSUES = 200;
+
+export type ValidationResult = { ok: true; doc: Topology } | { ok: false; issues: Issue[] };
+
+function capped(issues: Issue[]): Issue[] {
+  if (issues.length <= MAX_ISSUES) return issues;
+  const rest = issues.length - (MAX_ISSUES - 1);
+  return [
+    ...issues.slice(0, MAX_ISSUES - 1),
+    { path: '', message: `…and ${rest} more problems; fix these first.` },
+  ];
+}
+
+export function validateTopology(input: unknown): ValidationResult {
+  try {
+    const parsed = topologySchema.safeParse(input);
+    if (!parsed.success) return { ok: false, issues: capped(describeZodIssues(parsed.error, input)) };
+    const issues = crossReferenceIssues(parsed.data);
+    if (issues.length > 0) return { ok: false, issues: capped(issues) };
+    return { ok: true, doc: parsed.data };
+  } catch (error) {
+    // Only pathological input gets here (a getter that throws, a stack overflow on a cyclic
+    // structure); it is still the sender's mistake, never a crash.
+    const reason = error instanceof Error ? error.message : 'unknown error';
+    return { ok: false, issues: [{ path: '', message: `The document could not be read (${reason}).` }] };
+  }
+}
