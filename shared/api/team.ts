@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { emailSchema, newPasswordSchema, roleSchema } from './auth';
 import type { Role } from '../roles';
+import { idParam } from './common';
 
 export const invitationBody = z.object({ email: emailSchema, role: roleSchema }).strict();
 export type InvitationBody = z.infer<typeof invitationBody>;
@@ -41,3 +42,13 @@ export type MailMessage = {
   html: string | null;
   date: string;
 };
+
+/** `:id` of a member or an invitation. */
+export const idParams = z.object({ id: idParam }).strict();
+export type IdParams = z.infer<typeof idParams>;
+
+/** An invitation token is 32 random bytes in base64url: exactly 43 characters of A–Z a–z 0–9 - _. */
+export const invitationTokenParams = z
+  .object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'This is not an invitation link') })
+  .strict();
+export type InvitationTokenParams = z.infer<typeof invitationTokenParams>;

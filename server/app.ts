@@ -1,0 +1,46 @@
+import express, { type Express } from 'express';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { securityHeaders } from './http/security';
+import { sessionMiddleware } from './http/session-middleware';
+import { webApp } from './http/web-app';
+import type { Mailer } from './mail/mailer';
+import { loadSessionUser } from './middleware/auth';
+import { apiNotFound, BODY_LIMIT_BYTES, errorHandler } from './middleware/errors';
+import { refuseCrossSite } from './middleware/origin';
+import { getModels } from './models';
+import { apiRoutes } from './routes';
+import { createServices } from './services';
+import { createPasswords } from './services/passwords';
+
+export type AppDeps = { sequelize: Sequelize; mailer: Mailer; config: Config };
+
+/** Build the whole HTTP app on a migrated database; the caller decides where it listens. */
+export function createApp({ sequelize, mailer, config }: AppDeps): Express {
+  const models = getModels(sequelize);
+  const services = createServices({ sequelize, models, mailer, config, passwords: createPasswords(config.bcryptCost) });
+  const app = express();
+
+  app.disable('x-powered-by');
+  // In production a TLS proxy sits in front: trust its one hop for the client address and https.
+  if (config.isProduction) app.set('trust proxy', 1);
+
+  app.use(securityHeaders(config.isProduction));
+  app.use(refuseCrossSite(config.trustedOrigins));
+
+  const api = express.Router();
+  api.use(express.json({ limit: BODY_LIMIT_BYTES }));
+  api.use(sessionMiddleware(sequelize, config));
+  api.use(loadSessionUser(services.auth));
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(apiRoutes(services, mailer.mailbox));
+  app.use('/api', api);
+
+  app.use(webApp(config.webDir));
+  app.use(apiNotFound);
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,36 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Router } from 'express';
+
+/**
+ * Serve the exported web app (`npm run build:web`) with an SPA fallback: any GET that is not a file and
+ * not under /api gets index.html, and the client router takes over. Hashed bundles are cached for a
+ * year; index.html never, so a new build is picked up on the next load.
+ */
+export function webApp(webDir: string): Router {
+  const router = express.Router();
+  const index = path.join(webDir, 'index.html');
+  if (!existsSync(index)) {
+    router.get('/{*splat}', (_req, res) => {
+      res.status(404).type('text/plain').send('The web app is not built yet. Run `npm run build:web` or `npm start`.');
+    });
+    return router;
+  }
+  router.use(
+    express.static(webDir, {
+      index: false,
+      dotfiles: 'ignore',
+      setHeaders(res, file) {
+        const immutable = file.includes(`${path.sep}_expo${path.sep}static${path.sep}`);
+        res.setHeader('Cache-Control', immutable ? 'public, max-age=31536000, immutable' : 'no-cache');
+      },
+    }),
+  );
+  router.get('/{*splat}', (req, res, next) => {
+    // A missing file (an old bundle, a favicon) is a 404, not the app's HTML.
+    if (path.extname(req.path) !== '') return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(index);
+  });
+  return router;
+}

@@ -1,0 +1,14 @@
+import type { MigrationModule } from './types';
+import * as teamsAndUsers from './0001-teams-and-users';
+import * as invitations from './0002-invitations';
+import * as sessions from './0003-sessions';
+
+/**
+ * Every migration, in order. To add one: create `NNNN-what-it-does.ts` exporting `up` and `down`,
+ * and append it here (a test checks that each file in this folder is listed). Never edit a released one.
+ */
+export const MIGRATIONS: ReadonlyArray<readonly [name: string, module: MigrationModule]> = [
+  ['0001-teams-and-users', teamsAndUsers],
+  ['0002-invitations', invitations],
+  ['0003-sessions', sessions],
+];

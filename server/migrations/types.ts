@@ -1,0 +1,5 @@
+import type { QueryInterface } from 'sequelize';
+import type { MigrationFn } from 'umzug';
+
+export type Migration = MigrationFn<QueryInterface>;
+export type MigrationModule = { up: Migration; down: Migration };

@@ -1,0 +1,37 @@
+import type { ModelStatic, Sequelize } from 'sequelize';
+import { defineInvitation, type InvitationRow } from './invitation';
+import { defineSession, type SessionRow } from './session';
+import { defineTeam, type TeamRow } from './team';
+import { defineUser, type UserRow } from './user';
+
+export type { InvitationRow, SessionRow, TeamRow, UserRow };
+
+export type Models = {
+  Team: ModelStatic<TeamRow>;
+  User: ModelStatic<UserRow>;
+  Invitation: ModelStatic<InvitationRow>;
+  Session: ModelStatic<SessionRow>;
+};
+
+const cache = new WeakMap<Sequelize, Models>();
+
+/**
+ * The models bound to one Sequelize instance (each test has its own in-memory database, so models are
+ * defined per instance rather than as global classes). Tables come from migrations, never from sync().
+ */
+export function getModels(sequelize: Sequelize): Models {
+  const known = cache.get(sequelize);
+  if (known) return known;
+  const models: Models = {
+    Team: defineTeam(sequelize),
+    User: defineUser(sequelize),
+    Invitation: defineInvitation(sequelize),
+    Session: defineSession(sequelize),
+  };
+  models.Team.hasMany(models.User, { foreignKey: 'teamId', as: 'members' });
+  models.User.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });
+  models.Invitation.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });
+  models.Invitation.belongsTo(models.User, { foreignKey: 'invitedById', as: 'invitedBy' });
+  cache.set(sequelize, models);
+  return models;
+}

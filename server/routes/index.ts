@@ -1,0 +1,22 @@
+import { Router } from 'express';
+import type { Mailbox } from '@/server/mail/mailbox';
+import { apiNotFound } from '@/server/middleware/errors';
+import type { Services } from '@/server/services';
+import { authRoutes } from './auth';
+import { devMailRoutes } from './dev-mail';
+import { invitationRoutes } from './invitations';
+import { teamRoutes } from './team';
+
+/**
+ * Everything under /api. Each route names its own guard (requireUser / requireCapability) next to its
+ * path; the only routes without one are sign-in, sign-out and the invitation-token routes.
+ */
+export function apiRoutes(services: Services, mailbox: Mailbox | null): Router {
+  const api = Router();
+  api.use('/auth', authRoutes(services));
+  api.use('/team', teamRoutes(services));
+  api.use('/invitations', invitationRoutes(services));
+  api.use('/dev/mail', devMailRoutes(mailbox));
+  api.use(apiNotFound);
+  return api;
+}

@@ -1,0 +1,62 @@
+import { Op } from 'sequelize';
+import type { User } from '@/shared/api/auth';
+import type { Member, TeamResponse } from '@/shared/api/team';
+import { can, type Role } from '@/shared/roles';
+import type { ServiceDeps } from './deps';
+import { toMember, toPendingInvitation } from './dto';
+import { fail, ok, type Result } from './result';
+
+const NO_SUCH_MEMBER = 'There is no such member in your team.';
+
+export function createTeamService({ models }: Pick<ServiceDeps, 'models'>) {
+  const { Team, User: Users, Invitation, Session } = models;
+
+  /** A member of the viewer's team; members of other teams are "not found" like ids that do not exist (api.md). */
+  async function findMember(viewer: User, memberId: number) {
+    return Users.findOne({ where: { id: memberId, teamId: viewer.teamId } });
+  }
+
+  return {
+    async getTeam(viewer: User): Promise<Result<TeamResponse>> {
+      const team = await Team.findByPk(viewer.teamId);
+      if (!team) return fail('not-found', 'Your team no longer exists.');
+      const members = await Users.findAll({ where: { teamId: team.id }, order: [['name', 'ASC'], ['id', 'ASC']] });
+      const response: TeamResponse = { team: { id: team.id, name: team.name }, members: members.map(toMember) };
+      if (can(viewer.role, 'manageTeam')) {
+        const pending = await Invitation.findAll({
+          where: { teamId: team.id, acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
+          include: [{ model: Users, as: 'invitedBy' }],
+          order: [['createdAt', 'DESC'], ['id', 'DESC']],
+        });
+        const byId = new Map(members.map((m) => [m.id, m]));
+        response.invitations = pending.map((row) => toPendingInvitation(row, row.invitedById ? (byId.get(row.invitedById) ?? null) : null));
+      }
+      return ok(response);
+    },
+
+    /** Admins may not change their own role: a team must never be left without an admin by accident. */
+    async changeRole(viewer: User, memberId: number, role: Role): Promise<Result<Member>> {
+      const member = await findMember(viewer, memberId);
+      if (!member) return fail('not-found', NO_SUCH_MEMBER);
+      if (member.id === viewer.id && role !== member.role) {
+        return fail('conflict', 'You cannot change your own role. Ask another admin to do it.');
+      }
+      if (member.role !== role) await member.update({ role });
+      return ok(toMember(member));
+    },
+
+    /** Removing a member also ends every session of theirs at once. */
+    async removeMember(viewer: User, memberId: number): Promise<Result<null>> {
+      const member = await findMember(viewer, memberId);
+      if (!member) return fail('not-found', NO_SUCH_MEMBER);
+      if (member.id === viewer.id) {
+        return fail('conflict', 'You cannot remove yourself from the team. Ask another admin to do it.');
+      }
+      await Session.destroy({ where: { userId: member.id } });
+      await member.destroy();
+      return ok(null);
+    },
+  };
+}
+
+export type TeamService = ReturnType<typeof createTeamService>;
