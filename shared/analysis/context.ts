@@ -1,0 +1,108 @@
+import { displayName, indexTopology, type PortRef, type TopologyIndex } from '@/shared/topology/index';
+import type { Cable, Topology } from '@/shared/topology/schema';
+import type { UnitKind } from '@/shared/analysis/types';
+
+/**
+ * What every part of the analysis needs to know about one document: the lookups, which units have
+ * failed (what-if), and how each cable end takes part in data paths.
+ */
+export type AnalysisContext = {
+  doc: Topology;
+  index: TopologyIndex;
+  failed: ReadonlySet<string>;
+  /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
+  hasNetworks: boolean;
+};
+
+/**
+ * How a cable end takes part in data paths: a controller or host data port ends a path, a port of a
+ * data or shared switch forwards, and anything else (management ports, management switches, a
+ * failed unit) carries no data path.
+ */
+export type EndRole = 'controller' | 'host' | 'switch' | 'none';
+
+export function createContext(doc: Topology, failed: readonly string[] = []): AnalysisContext {
+  return { doc, index: indexTopology(doc), failed: new Set(failed), hasNetworks: doc.networks.length > 0 };
+}
+
+export function isForwardingSwitch(ctx: AnalysisContext, ref: PortRef): boolean {
+  const device = ref.device;
+  return device.kind === 'switch' && device.role !== 'management' && !ctx.failed.has(device.id);
+}
+
+export function endRole(ctx: AnalysisContext, ref: PortRef | undefined): EndRole {
+  if (!ref) return 'none';
+  if (ref.device.kind === 'switch') return isForwardingSwitch(ctx, ref) ? 'switch' : 'none';
+  if (ref.port.role !== 'data') return 'none';
+  if (ref.controller) return ctx.failed.has(ref.controller.id) ? 'none' : 'controller';
+  if (ref.adapter) return ctx.failed.has(ref.adapter.id) ? 'none' : 'host';
+  return 'none';
+}
+
+/** A cable that can carry a data path, with its ends classified; null when it cannot. */
+export function dataCable(
+  ctx: AnalysisContext,
+  cable: Cable,
+): { a: PortRef; b: PortRef; roleA: EndRole; roleB: EndRole } | null {
+  if (ctx.failed.has(cable.id)) return null;
+  const a = ctx.index.ports.get(cable.a);
+  const b = ctx.index.ports.get(cable.b);
+  const roleA = endRole(ctx, a);
+  const roleB = endRole(ctx, b);
+  if (!a || !b || roleA === 'none' || roleB === 'none') return null;
+  // Hosts and controllers end paths; two path ends joined directly only count host-to-controller.
+  if (roleA !== 'switch' && roleB !== 'switch' && roleA === roleB) return null;
+  if (roleA === 'switch' && roleB === 'switch' && a.device.id === b.device.id) return null;
+  return { a, b, roleA, roleB };
+}
+
+/** Whether a host port and a controller port may form a session by their networks. */
+export function networksPair(ctx: AnalysisContext, hostNet?: string, controllerNet?: string): boolean {
+  if (!ctx.hasNetworks || hostNet === undefined || controllerNet === undefined) return true;
+  return hostNet === controllerNet;
+}
+
+export function unitKindOf(ctx: AnalysisContext, id: string): UnitKind | null {
+  if (ctx.index.cables.has(id)) return 'cable';
+  if (ctx.index.adapters.has(id)) return 'adapter';
+  if (ctx.index.controllers.has(id)) return 'controller';
+  return ctx.index.devices.get(id)?.kind === 'switch' ? 'switch' : null;
+}
+
+const KIND_WORDS: Record<UnitKind, string> = {
+  cable: 'cable',
+  adapter: 'card',
+  switch: 'switch',
+  controller: 'controller',
+};
+
+/** "switch fab-a", "card wms-db-1 card-2", "cable A-07": a unit as a designer names it. */
+export function describeUnit(ctx: AnalysisContext, id: string): string {
+  const kind = unitKindOf(ctx, id);
+  if (kind === 'cable') {
+    const cable = ctx.index.cables.get(id)!;
+    return `cable ${cable.label?.trim() || cable.id}`;
+  }
+  if (kind === 'adapter') {
+    const { adapter, host } = ctx.index.adapters.get(id)!;
+    return `card ${displayName(adapter)} of ${displayName(host)}`;
+  }
+  if (kind === 'controller') {
+    const { controller, array } = ctx.index.controllers.get(id)!;
+    return `controller ${displayName(controller)} of ${displayName(array)}`;
+  }
+  const device = ctx.index.devices.get(id);
+  return device ? `${KIND_WORDS.switch} ${displayName(device)}` : id;
+}
+
+export function nameOf(ctx: AnalysisContext, id: string): string {
+  const device = ctx.index.devices.get(id);
+  if (device) return displayName(device);
+  const network = ctx.index.networks.get(id);
+  return network ? displayName(network) : id;
+}
+
+/** Plain code-unit order: the same in every browser and on the server, unlike localeCompare. */
+export function byId(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}

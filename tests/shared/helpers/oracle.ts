@@ -1,0 +1,118 @@
+import type { HostArrayResult } from '@/shared/analysis/types';
+import type { Topology } from '@/shared/topology/schema';
+
+/**
+ * The brute-force method the analysis must agree with, written straight from
+ * resilience-analysis.md and sharing no code with it: count sessions by searching from every host
+ * data port, then fail each unit in turn and search everything again. Quadratic on purpose.
+ */
+type PortInfo = {
+  id: string;
+  role: string;
+  networkId?: string;
+  owner: 'host' | 'controller' | 'switch';
+  deviceId: string;
+  unitId: string; // card, controller or switch the port dies with
+  switchRole?: string;
+};
+
+function portsOf(doc: Topology): Map<string, PortInfo> {
+  const ports = new Map<string, PortInfo>();
+  for (const d of doc.devices) {
+    if (d.kind === 'array') {
+      for (const c of d.controllers) for (const p of c.ports) ports.set(p.id, { ...p, owner: 'controller', deviceId: d.id, unitId: c.id });
+    } else if (d.kind === 'host') {
+      for (const a of d.adapters) for (const p of a.ports) ports.set(p.id, { ...p, owner: 'host', deviceId: d.id, unitId: a.id });
+    } else {
+      for (const p of d.ports) ports.set(p.id, { ...p, owner: 'switch', deviceId: d.id, unitId: d.id, switchRole: d.role });
+    }
+  }
+  return ports;
+}
+
+type Table = Map<string, { sessions: number; controllers: Set<string> }>;
+
+function sessionsTable(doc: Topology, failed: Set<string>): Table {
+  const ports = portsOf(doc);
+  const alive = (p: PortInfo) => !failed.has(p.unitId);
+  const cablesAt = new Map<string, string[]>();
+  for (const c of doc.cables) {
+    if (failed.has(c.id)) continue;
+    cablesAt.set(c.a, [...(cablesAt.get(c.a) ?? []), c.b]);
+    cablesAt.set(c.b, [...(cablesAt.get(c.b) ?? []), c.a]);
+  }
+  const switchPorts = new Map<string, string[]>();
+  for (const p of ports.values()) if (p.owner === 'switch') switchPorts.set(p.deviceId, [...(switchPorts.get(p.deviceId) ?? []), p.id]);
+  const table: Table = new Map();
+  for (const hp of ports.values()) {
+    if (hp.owner !== 'host' || hp.role !== 'data' || !alive(hp)) continue;
+    // Breadth-first over ports: across cables, and through forwarding switches only.
+    const seen = new Set<string>([hp.id]);
+    const queue = [hp.id];
+    const found = new Set<string>();
+    while (queue.length) {
+      const at = queue.shift()!;
+      for (const far of cablesAt.get(at) ?? []) {
+        const q = ports.get(far)!;
+        if (!alive(q)) continue;
+        if (q.owner === 'controller' && q.role === 'data') found.add(q.id);
+        if (q.owner !== 'switch' || q.switchRole === 'management') continue;
+        for (const sibling of switchPorts.get(q.deviceId)!) {
+          if (!seen.has(sibling)) {
+            seen.add(sibling);
+            queue.push(sibling);
+          }
+        }
+      }
+    }
+    for (const cpId of found) {
+      const cp = ports.get(cpId)!;
+      const pairs = doc.networks.length === 0 || !hp.networkId || !cp.networkId || hp.networkId === cp.networkId;
+      if (!pairs) continue;
+      const key = `${hp.deviceId}\u0000${cp.deviceId}`;
+      const entry = table.get(key) ?? { sessions: 0, controllers: new Set<string>() };
+      entry.sessions += 1;
+      entry.controllers.add(cp.unitId);
+      table.set(key, entry);
+    }
+  }
+  return table;
+}
+
+export function failureUnits(doc: Topology): string[] {
+  const units = doc.cables.map((c) => c.id);
+  for (const d of doc.devices) {
+    if (d.kind === 'switch') units.push(d.id);
+    if (d.kind === 'array') units.push(...d.controllers.map((c) => c.id));
+    if (d.kind === 'host') units.push(...d.adapters.map((a) => a.id));
+  }
+  return units;
+}
+
+const order = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
+export function bruteForceHosts(doc: Topology, failed: string[] = []): HostArrayResult[] {
+  const down = new Set(failed);
+  const base = sessionsTable(doc, down);
+  const spof = new Map<string, string[]>();
+  for (const unit of failureUnits(doc)) {
+    if (down.has(unit)) continue;
+    const without = sessionsTable(doc, new Set([...down, unit]));
+    for (const key of base.keys()) {
+      if (!without.has(key)) spof.set(key, [...(spof.get(key) ?? []), unit]);
+    }
+  }
+  const result: HostArrayResult[] = [...base.entries()].map(([key, entry]) => {
+    const [host, array] = key.split('\u0000');
+    const units = (spof.get(key) ?? []).sort(order);
+    return {
+      host,
+      array,
+      sessions: entry.sessions,
+      controllersReached: [...entry.controllers].sort(order),
+      singlePointsOfFailure: units,
+      redundant: units.length === 0,
+    };
+  });
+  return result.sort((x, y) => order(x.host, y.host) || order(x.array, y.array));
+}
