@@ -1,7 +1,44 @@
 import type { AnalysisContext } from '@/shared/analysis/context';
+import { addressingFindings } from '@/shared/analysis/rules/addressing';
+import { cablingFindings } from '@/shared/analysis/rules/cabling';
+import { namingFindings } from '@/shared/analysis/rules/naming';
+import { networkFindings } from '@/shared/analysis/rules/networks';
+import { separationFindings } from '@/shared/analysis/rules/separation';
 import type { Finding } from '@/shared/analysis/types';
 
 /** The design-rule groups that read the document itself (redundancy findings read hosts[] instead). */
 export type RuleGroup = (ctx: AnalysisContext) => Finding[];
 
-export const RULE_GROUPS: RuleGroup[] = [];
+export const RULE_GROUPS: RuleGroup[] = [separationFindings, networkFindings, addressingFindings, cablingFindings, namingFindings];
+
+/** Every rule id the analysis can report, with its severity — for filters and legends in the UI. */
+export const RULES = {
+  'single-point-of-failure': 'error',
+  'host-unreachable': 'error',
+  'one-controller-only': 'error',
+  'management-port-on-data-switch': 'error',
+  'data-port-on-management-switch': 'error',
+  'management-data-bridge': 'error',
+  'shared-switch-in-use': 'warning',
+  'network-overlap': 'error',
+  'management-data-same-subnet': 'error',
+  'address-outside-network': 'error',
+  'address-duplicate': 'error',
+  'address-reserved': 'error',
+  'vlan-out-of-range': 'error',
+  'mtu-out-of-range': 'error',
+  'mtu-mismatch': 'error',
+  'port-unaddressed': 'warning',
+  'port-double-cabled': 'error',
+  'connector-mismatch': 'error',
+  'speed-mismatch': 'warning',
+  'media-unsuited': 'error',
+  'cable-too-long': 'error',
+  'cable-unmeasured': 'info',
+  'iqn-invalid': 'error',
+  'iqn-duplicate': 'error',
+  'iqn-missing': 'info',
+  'chap-off': 'warning',
+} as const;
+
+export type RuleId = keyof typeof RULES;

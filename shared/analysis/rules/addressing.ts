@@ -1,0 +1,112 @@
+import { containsIp, isReservedInBlock, parseCidr, type Cidr } from '@/shared/address/cidr';
+import { formatIp, parseIp } from '@/shared/address/ip';
+import { nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import type { Finding } from '@/shared/analysis/types';
+import { displayName, iteratePorts, portLabel, type PortRef } from '@/shared/topology/index';
+
+/**
+ * Port addressing: every cabled host or controller port on a network of its own kind, with an
+ * address inside that network that is neither reserved nor used twice (nor the gateway).
+ */
+function blocks(ctx: AnalysisContext): Map<string, Cidr> {
+  const map = new Map<string, Cidr>();
+  for (const network of ctx.doc.networks) {
+    const block = parseCidr(network.cidr);
+    if (block) map.set(network.id, block);
+  }
+  return map;
+}
+
+function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>): Finding[] {
+  const { port } = ref;
+  const label = portLabel(ref);
+  const network = port.networkId ? ctx.index.networks.get(port.networkId) : undefined;
+  const out: Finding[] = [];
+  if (cabled && !network) {
+    out.push({ rule: 'port-unaddressed', severity: 'warning', subjects: [port.id], message: `${label} is cabled but on no network.` });
+  } else if (cabled && !port.address) {
+    out.push({ rule: 'port-unaddressed', severity: 'warning', subjects: [port.id], message: `${label} is cabled but has no address.` });
+  }
+  if (network && network.purpose !== port.role) {
+    out.push({
+      rule: 'management-data-same-subnet',
+      severity: 'error',
+      subjects: [port.id, network.id],
+      message: `${label} is a ${port.role} port on the ${network.purpose} network ${displayName(network)}; management and data must not share a subnet.`,
+    });
+  }
+  if (port.address?.mode !== 'static' || !network) return out;
+  const ip = parseIp(port.address.ip);
+  const block = cidrs.get(network.id);
+  if (!ip || !block) return out;
+  if (!containsIp(block, ip)) {
+    out.push({
+      rule: 'address-outside-network',
+      severity: 'error',
+      subjects: [port.id, network.id],
+      message: `${label} has ${port.address.ip}, which is outside ${displayName(network)} (${network.cidr}).`,
+    });
+  } else if (isReservedInBlock(block, ip)) {
+    const what = ip.family === 'ipv4' ? 'the network or broadcast address' : 'the subnet-router anycast address';
+    out.push({
+      rule: 'address-reserved',
+      severity: 'error',
+      subjects: [port.id, network.id],
+      message: `${label} has ${port.address.ip}, ${what} of ${displayName(network)}.`,
+    });
+  }
+  return out;
+}
+
+function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Finding[] {
+  const out: Finding[] = [];
+  for (const network of ctx.doc.networks) {
+    const block = cidrs.get(network.id);
+    const gateway = network.gateway ? parseIp(network.gateway) : null;
+    if (!block || !gateway || containsIp(block, gateway)) continue;
+    out.push({
+      rule: 'address-outside-network',
+      severity: 'error',
+      subjects: [network.id],
+      message: `The gateway ${network.gateway} of ${displayName(network)} is outside ${network.cidr}.`,
+    });
+  }
+  return out;
+}
+
+/** The same address on two ports, or a port on its network's gateway address. */
+function duplicateFindings(ctx: AnalysisContext): Finding[] {
+  const holders = new Map<string, string[]>();
+  const add = (ip: string | undefined, holder: string) => {
+    const parsed = ip ? parseIp(ip) : null;
+    if (!parsed) return;
+    const key = formatIp(parsed);
+    holders.set(key, [...(holders.get(key) ?? []), holder]);
+  };
+  for (const network of ctx.doc.networks) add(network.gateway, network.id);
+  for (const ref of iteratePorts(ctx.doc)) {
+    if (ref.port.address?.mode === 'static') add(ref.port.address.ip, ref.port.id);
+  }
+  const out: Finding[] = [];
+  for (const [ip, ids] of holders) {
+    const ports = ids.filter((id) => ctx.index.ports.has(id));
+    if (ids.length < 2 || ports.length === 0) continue;
+    const names = ids.map((id) => {
+      const ref = ctx.index.ports.get(id);
+      return ref ? portLabel(ref) : `the gateway of ${nameOf(ctx, id)}`;
+    });
+    out.push({ rule: 'address-duplicate', severity: 'error', subjects: ids, message: `${ip} is used by ${names.join(' and ')}.` });
+  }
+  return out;
+}
+
+export function addressingFindings(ctx: AnalysisContext): Finding[] {
+  const cidrs = blocks(ctx);
+  const out: Finding[] = [];
+  for (const ref of iteratePorts(ctx.doc)) {
+    if (ref.device.kind === 'switch') continue;
+    out.push(...portFindings(ctx, ref, ctx.index.cablesByPort.has(ref.port.id), cidrs));
+  }
+  out.push(...gatewayFindings(ctx, cidrs), ...duplicateFindings(ctx));
+  return out;
+}

@@ -1,0 +1,191 @@
+import { analyze } from '@/shared/analysis/analyze';
+import { reachOf } from '@/shared/rules/cables';
+import { checkIscsiName } from '@/shared/rules/iqn';
+import { LIMITS } from '@/shared/rules/limits';
+import type { Topology } from '@/shared/topology/schema';
+import { validateTopology } from '@/shared/topology/validate';
+import { twoFabrics } from './helpers/topologies';
+
+/** A valid design with one change, and the findings of one rule on it. */
+function findings(rule: string, edit: (doc: Topology, d: ReturnType<typeof twoFabrics>) => void) {
+  const d = twoFabrics();
+  const doc = d.doc;
+  edit(doc, d);
+  const checked = validateTopology(doc);
+  if (!checked.ok) throw new Error(JSON.stringify(checked.issues));
+  return analyze(checked.doc).findings.filter((f) => f.rule === rule);
+}
+
+const lengthOnCable = (media: Topology['cables'][number]['media'], lengthM: number, speedGbps: 1 | 10 | 25 = 10) =>
+  findings('cable-too-long', (doc, d) => {
+    doc.cables[0].media = media;
+    doc.cables[0].lengthM = lengthM;
+    const connector = media.startsWith('cat') ? 'rj45' : 'sfp';
+    for (const end of [doc.cables[0].a, doc.cables[0].b]) Object.assign(d.port(end), { connector, speedGbps });
+  });
+
+describe('cable reach against the published values', () => {
+  it('holds the reach table to its sources', () => {
+    expect(reachOf('cat6', 10)!.maxM).toBe(55); // IEEE 802.3an clause 55; TIA TSB-155
+    expect(reachOf('cat6a', 10)!.maxM).toBe(100); // IEEE 802.3an
+    expect(reachOf('cat5e', 1)!.maxM).toBe(100); // IEEE 802.3 clause 40 (clause number from memory)
+    expect(reachOf('om3', 10)!.maxM).toBe(300); // IEEE 802.3ae 10GBASE-SR
+    expect(reachOf('om4', 10)!.maxM).toBe(400); // IEEE 802.3ae / 802.3-2012 10GBASE-SR
+    expect(reachOf('om3', 25)!.maxM).toBe(70); // IEEE 802.3by clause 112
+    expect(reachOf('om4', 25)!.maxM).toBe(100); // IEEE 802.3by clause 112
+    expect(reachOf('dac', 10)!.maxM).toBe(7); // SFF-8431 appendix E (common practice for the limit)
+  });
+
+  it('flags 10GBASE-T past 55 m of Category 6 but not Category 6A up to 100 m', () => {
+    expect(lengthOnCable('cat6', 55)).toEqual([]); // IEEE 802.3an: 55 m on Cat 6
+    expect(lengthOnCable('cat6', 56)).toHaveLength(1);
+    expect(lengthOnCable('cat6a', 100)).toEqual([]); // IEEE 802.3an: 100 m on Cat 6A
+    expect(lengthOnCable('cat6a', 101)).toHaveLength(1);
+  });
+
+  it('allows 1000BASE-T over 100 m of Category 5e and no more', () => {
+    expect(lengthOnCable('cat5e', 100, 1)).toEqual([]); // IEEE 802.3 clause 40 (from memory)
+    expect(lengthOnCable('cat5e', 100.5, 1)).toHaveLength(1);
+  });
+
+  it('flags 10GBASE-SR past 300 m of OM3 and 400 m of OM4', () => {
+    expect(lengthOnCable('om3', 300)).toEqual([]); // IEEE 802.3ae
+    expect(lengthOnCable('om3', 301)).toHaveLength(1);
+    expect(lengthOnCable('om4', 400)).toEqual([]); // IEEE 802.3ae / 802.3-2012
+    expect(lengthOnCable('om4', 401)).toHaveLength(1);
+  });
+
+  it('reports media that cannot carry the link speed at all', () => {
+    const found = findings('media-unsuited', (doc) => {
+      doc.cables[0].media = 'cat5e'; // no 10GBASE-T on Category 5e in IEEE 802.3an
+    });
+    expect(found).toHaveLength(1);
+    expect(found[0].message).toContain('cannot carry 10 Gb/s');
+  });
+
+  it('reports mismatched connectors and speeds, and cables without a length', () => {
+    expect(findings('connector-mismatch', (doc, d) => (d.port(doc.cables[0].a).connector = 'sfp'))).toHaveLength(1);
+    expect(findings('connector-mismatch', (doc) => (doc.cables[0].media = 'om4'))).toHaveLength(1);
+    expect(findings('speed-mismatch', (doc, d) => (d.port(doc.cables[0].a).speedGbps = 25))[0].severity).toBe('warning');
+    expect(findings('cable-unmeasured', (doc) => delete doc.cables[0].lengthM)[0].severity).toBe('info');
+  });
+
+  it('reports a port cabled twice', () => {
+    const found = findings('port-double-cabled', (doc) => doc.cables.push({ id: 'extra', a: 'h1.c1.1', b: 'fb.9', media: 'cat6a', lengthM: 2 }));
+    expect(found.map((f) => f.subjects)).toEqual([['h1.c1.1', 'k5', 'extra']]);
+  });
+});
+
+describe('networks and addresses', () => {
+  it('accepts VLAN ids 1 and 4094 and flags 0 and 4095', () => {
+    const vlan = (value: number) => findings('vlan-out-of-range', (doc) => (doc.networks[0].vlan = value));
+    expect(vlan(1)).toEqual([]); // IEEE 802.1Q: 1–4094 usable
+    expect(vlan(4094)).toEqual([]); // IEEE 802.1Q
+    expect(vlan(0)).toHaveLength(1); // IEEE 802.1Q: 0 is reserved (priority tag)
+    expect(vlan(4095)).toHaveLength(1); // IEEE 802.1Q: 4095 is reserved
+    expect(LIMITS.vlanMax.value).toBe(4094); // IEEE 802.1Q
+  });
+
+  it('flags an MTU outside 576–9216 and jumbo and standard networks joined by a path', () => {
+    expect(findings('mtu-out-of-range', (doc) => (doc.networks[0].mtu = 9217))).toHaveLength(1); // 9216: common practice
+    expect(LIMITS.mtuDefault.value).toBe(1500); // RFC 894 (erratum 570)
+    const mismatch = findings('mtu-mismatch', (doc, d) => {
+      delete doc.networks[1].mtu; // runs 1500 by default (RFC 894) against fabric A's jumbo 9000 (common practice)
+      d.port('h1.c2.1').networkId = 'nb';
+      doc.cables[5].b = 'fa.7'; // host's fabric-B port now sits on fabric A's switch
+    });
+    expect(mismatch.map((f) => f.subjects)).toEqual([['na', 'nb']]);
+  });
+
+  it('flags overlapping subnets, and management overlapping data separately', () => {
+    expect(findings('network-overlap', (doc) => (doc.networks[1].cidr = '198.51.100.128/25'))).toHaveLength(1); // RFC 4632 nesting
+    const mixed = findings('management-data-same-subnet', (doc) => {
+      doc.networks.push({ id: 'nm', name: 'mgmt', purpose: 'management', cidr: '198.51.100.0/26' });
+    });
+    expect(mixed.map((f) => f.subjects)).toEqual([['na', 'nm']]);
+  });
+
+  it('flags addresses outside the network, reserved, duplicated, or on the gateway', () => {
+    const set = (d: ReturnType<typeof twoFabrics>, port: string, ip: string) => (d.port(port).address = { mode: 'static', ip });
+    expect(findings('address-outside-network', (_, d) => set(d, 'h1.c1.1', '203.0.113.10'))).toHaveLength(1); // RFC 5737 ranges differ
+    expect(findings('address-reserved', (_, d) => set(d, 'h1.c1.1', '198.51.100.0'))).toHaveLength(1); // network address, RFC 4632
+    expect(findings('address-reserved', (_, d) => set(d, 'h1.c1.1', '198.51.100.255'))).toHaveLength(1); // broadcast, RFC 919 §7
+    expect(findings('address-reserved', (doc, d) => {
+      doc.networks[0].cidr = '198.51.100.0/31';
+      set(d, 'h1.c1.1', '198.51.100.0'); // RFC 3021 §2.1: both /31 addresses are hosts
+    })).toEqual([]);
+    const dup = findings('address-duplicate', (_, d) => {
+      set(d, 'h1.c1.1', '198.51.100.21');
+      set(d, 'v.a.1', '198.51.100.21');
+    });
+    expect(dup.map((f) => f.subjects)).toEqual([['v.a.1', 'h1.c1.1']]);
+    const gateway = findings('address-duplicate', (doc, d) => {
+      doc.networks[0].gateway = '198.51.100.1';
+      set(d, 'h1.c1.1', '198.51.100.1');
+    });
+    expect(gateway.map((f) => f.subjects)).toEqual([['na', 'h1.c1.1']]);
+  });
+
+  it('warns about cabled ports without a network or an address', () => {
+    const found = findings('port-unaddressed', (_, d) => delete d.port('h1.c1.1').networkId);
+    expect(found.find((f) => f.subjects[0] === 'h1.c1.1')!.message).toContain('on no network');
+    expect(found.find((f) => f.subjects[0] === 'v.a.1')!.message).toContain('no address');
+  });
+
+  it('flags a data port on a management network', () => {
+    const found = findings('management-data-same-subnet', (doc, d) => {
+      doc.networks.push({ id: 'nm', name: 'mgmt', purpose: 'management', cidr: '192.0.2.0/24' }); // RFC 5737 §3
+      d.port('h1.c1.1').networkId = 'nm';
+    });
+    expect(found.map((f) => f.subjects)).toEqual([['h1.c1.1', 'nm']]);
+  });
+});
+
+describe('iSCSI names', () => {
+  it('accepts the examples of RFC 7143', () => {
+    for (const name of [
+      'iqn.2001-04.com.example', // RFC 7143 §4.2.7.4
+      'iqn.2001-04.com.example:storage:diskarrays-sn-a8675309', // RFC 7143 §4.2.7.4
+      'iqn.2001-04.com.example:storage.tape1.sys1.xyz', // RFC 7143 §4.2.7.4
+      'eui.02004567A425678D', // RFC 7143 §4.2.7.5 (uppercase hex, folded first)
+      'naa.52004567BA64678D', // RFC 3980 §4.1; RFC 7143 §4.2.7.6
+      'naa.62004567BA64678D0123456789ABCDEF', // RFC 3980 §4.1
+    ]) {
+      expect({ name, ok: checkIscsiName(name).ok }).toEqual({ name, ok: true });
+    }
+  });
+
+  it('rejects names derived from the RFC examples by breaking one rule', () => {
+    for (const name of [
+      'iqn.2001-13.com.example', // RFC 7143 §4.2.7.4: month 01–12
+      'iqn.01-04.com.example', // RFC 7143 §4.2.7.4: four-digit year
+      'iqn.2001-04', // RFC 7143 §4.2.7.4: naming authority required
+      'iqn.2001-04.com.example:storage_disk', // RFC 7143 §4.2.7.2: "_" prohibited
+      'iqn.2001-04.com.example:storage disk', // RFC 3722 §6: spaces prohibited
+      'iqn.2001-04.com.example:storage/disk', // RFC 3722: "/" prohibited
+      'eui.02004567A425678', // RFC 7143 §4.2.7.5: 16 hex digits
+      'naa.52004567BA64678D0', // RFC 3980 §4.1: 16 or 32 hex digits
+      'iqn.2001-04.com.example:' + 'a'.repeat(223 - 'iqn.2001-04.com.example:'.length + 1), // RFC 7143 §4.2.7.1: 223 bytes
+      'wwn.2001-04.com.example', // RFC 7143 §4.2.7: only iqn, eui, naa
+    ]) {
+      expect({ name, ok: checkIscsiName(name).ok }).toEqual({ name, ok: false });
+    }
+    expect(checkIscsiName('iqn.2001-04.com.example:' + 'a'.repeat(223 - 24)).ok).toBe(true); // exactly 223 bytes
+    expect(LIMITS.iscsiNameMaxBytes.value).toBe(223); // RFC 7143 §4.2.7.1
+  });
+
+  it('reports invalid and duplicate initiator names, comparing after case folding', () => {
+    expect(findings('iqn-invalid', (doc) => doc.devices[3].kind === 'host' && (doc.devices[3].iqn = 'iqn.2026-00.example.tidewater'))).toHaveLength(1);
+    const dup = findings('iqn-duplicate', (doc, d) => {
+      d.host('h2', { c1: 1 }, { iqn: 'IQN.2026-01.EXAMPLE.TIDEWATER:H1' }); // RFC 3722 §4: names fold to lowercase
+      if (doc.devices[3].kind === 'host') doc.devices[3].iqn = 'iqn.2026-01.example.tidewater:h1';
+    });
+    expect(dup.map((f) => f.subjects)).toEqual([['h1', 'h2']]);
+  });
+
+  it('warns when CHAP is off and not when it is on', () => {
+    expect(findings('chap-off', () => undefined)[0].severity).toBe('warning'); // RFC 7143 §9.2.1 recommends CHAP (common practice: prefer CHAP)
+    expect(findings('chap-off', (doc) => (doc.security = { chap: 'mutual' }))).toEqual([]);
+    expect(LIMITS.chapSecretMinBytes.value).toBe(12); // RFC 7143 §9.2.1: under 96 bits needs IPsec
+  });
+});
