@@ -27,8 +27,8 @@ export function webApp(webDir: string): Router {
     }),
   );
   router.get('/{*splat}', (req, res, next) => {
-    // A missing file (an old bundle, a favicon) is a 404, not the app's HTML.
-    if (path.extname(req.path) !== '') return next();
+    // A missing file (an old bundle, a favicon) or a dotfile is a 404, not the app's HTML.
+    if (path.extname(req.path) !== '' || path.basename(req.path).startsWith('.')) return next();
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(index);
   });
