@@ -1,0 +1,101 @@
+import { z } from 'zod';
+import type { ReportSummary } from '../analysis/summary';
+import type { Report } from '../analysis/types';
+import type { Topology } from '../topology/schema';
+
+/**
+ * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
+ * checked by `validateTopology` (shared/topology/validate.ts), which reports every problem with its
+ * path; here it is only required to be present, so that its issues come out with `document.` paths.
+ */
+
+export const DESIGN_STATUSES = ['draft', 'in-review', 'approved', 'changes-requested'] as const;
+export type DesignStatus = (typeof DESIGN_STATUSES)[number];
+
+/** The review state of one version: its latest review event, or draft when it has none. */
+export type ReviewState = DesignStatus;
+
+export const REVIEW_ACTIONS = ['submit', 'approve', 'request-changes'] as const;
+export type ReviewAction = (typeof REVIEW_ACTIONS)[number];
+
+const designName = z.string().trim().min(1, 'Give the design a name').max(120, 'Use at most 120 characters');
+const site = z.string().trim().max(120, 'Use at most 120 characters');
+const message = z.string().trim().min(1, 'Say what changed in this version').max(500, 'Use at most 500 characters');
+
+export const designIdParams = z.object({ id: z.coerce.number().int().positive() }).strict();
+export const versionParams = z
+  .object({ id: z.coerce.number().int().positive(), n: z.coerce.number().int().positive() })
+  .strict();
+export const diffQuery = z.object({ against: z.coerce.number().int().positive() }).strict();
+export const designListQuery = z.object({ q: z.string().max(120).optional() }).strict();
+
+export const createDesignBody = z
+  .object({ name: designName, site: site.optional(), document: z.unknown().optional(), message: message.optional() })
+  .strict();
+export type CreateDesignBody = z.infer<typeof createDesignBody>;
+
+export const saveVersionBody = z
+  .object({
+    baseVersion: z.number().int().positive().nullable(),
+    message,
+    document: z.unknown().refine((value) => value !== undefined, 'A version needs its topology document'),
+  })
+  .strict();
+export type SaveVersionBody = z.infer<typeof saveVersionBody>;
+
+export const restoreBody = z.object({ message }).strict();
+export type RestoreBody = z.infer<typeof restoreBody>;
+
+export const reviewBody = z
+  .object({
+    action: z.enum(REVIEW_ACTIONS),
+    comment: z.string().trim().max(4000, 'Use at most 4000 characters').optional(),
+  })
+  .strict();
+export type ReviewBody = z.infer<typeof reviewBody>;
+
+export type Person = { id: number; name: string };
+
+export type ReviewEventDto = {
+  id: number;
+  action: ReviewAction;
+  comment: string | null;
+  /** True when a version with error findings was approved; the comment is the reason given. */
+  override: boolean;
+  actor: Person;
+  createdAt: string;
+};
+
+export type VersionReview = { state: ReviewState; events: ReviewEventDto[] };
+
+export type VersionSummary = {
+  number: number;
+  message: string;
+  author: Person;
+  createdAt: string;
+  summary: ReportSummary;
+  contentHash: string;
+  review: VersionReview;
+};
+
+export type VersionDetail = VersionSummary & { document: Topology };
+
+export type DesignListItem = {
+  id: number;
+  name: string;
+  site: string | null;
+  status: DesignStatus;
+  /** The newest version the caller may see (installers: the newest approved one), or null. */
+  latestVersion: { number: number; createdAt: string; summary: ReportSummary; review: ReviewState } | null;
+  updatedAt: string;
+};
+
+export type DesignDto = Omit<DesignListItem, 'latestVersion'> & { createdAt: string; createdBy: Person | null };
+
+export type DesignsResponse = { designs: DesignListItem[] };
+export type DesignResponse = { design: DesignDto; versions: VersionSummary[] };
+export type CreateDesignResponse = { design: DesignDto; version: VersionSummary | null };
+export type VersionResponse = { version: VersionDetail };
+export type SaveVersionResponse = { version: VersionSummary };
+export type ReportResponse = { report: Report; summary: ReportSummary };
+export type ReviewResponse = { review: VersionReview; design: DesignDto };
