@@ -85,7 +85,8 @@ export function describeUnit(ctx: AnalysisContext, id: string): string {
   }
   if (kind === 'adapter') {
     const { adapter, host } = ctx.index.adapters.get(id)!;
-    return `card ${displayName(adapter)} of ${displayName(host)}`;
+    const name = displayName(adapter);
+    return `${/^card\b/i.test(name) ? name : `card ${name}`} of ${displayName(host)}`;
   }
   if (kind === 'controller') {
     const { controller, array } = ctx.index.controllers.get(id)!;

@@ -1,4 +1,4 @@
-import { describeUnit, nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import { byId, describeUnit, nameOf, unitKindOf, type AnalysisContext } from '@/shared/analysis/context';
 import type { Finding, HostArrayResult } from '@/shared/analysis/types';
 
 /**
@@ -7,7 +7,12 @@ import type { Finding, HostArrayResult } from '@/shared/analysis/types';
  */
 const LISTED_UNITS = 4;
 
-function unitList(ctx: AnalysisContext, units: string[]): string {
+// Messages name the biggest units first: a switch explains more than the cable that leads to it.
+const KIND_ORDER: Record<string, number> = { switch: 0, controller: 1, adapter: 2, cable: 3 };
+
+function unitList(ctx: AnalysisContext, ids: string[]): string {
+  const rank = (id: string) => KIND_ORDER[unitKindOf(ctx, id) ?? 'cable'];
+  const units = [...ids].sort((x, y) => rank(x) - rank(y) || byId(x, y));
   const words = units.slice(0, LISTED_UNITS).map((unit) => describeUnit(ctx, unit));
   if (units.length > LISTED_UNITS) return `${words.join(', ')} and ${units.length - LISTED_UNITS} more`;
   if (words.length === 1) return words[0];
