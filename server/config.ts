@@ -5,7 +5,7 @@ import { z } from 'zod';
 /** The server's whole environment (api.md), parsed once at start so a typo fails loudly instead of later. */
 const envSchema = z.object({
   NODE_ENV: z.string().optional(),
-  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  PORT: z.coerce.number({ error: 'use a port number from 0 to 65535' }).int().min(0).max(65535).default(8080),
   DATABASE_PATH: z.string().trim().min(1).default('data/cablewright.sqlite'),
   SESSION_SECRET: z.string().optional(),
   SEED: z.enum(['demo', 'none']).optional(),
