@@ -1,0 +1,8 @@
+/** Every command as a plain function `(doc, args) => doc`; the keys are the registry's names. */
+export { addDevice, deleteDevices, renameDevice, renamePart, setDevice } from '@/lib/editor/commands/devices';
+export { addAdapter, addController, addPort, removeAdapter, removeController, removePort, setPort } from '@/lib/editor/commands/ports';
+export { cablePorts, setCable, uncable, uncablePort } from '@/lib/editor/commands/cabling';
+export { addNetwork, removeNetwork, renameDesign, setChap, updateNetwork } from '@/lib/editor/commands/networks';
+export { autoAssignAddresses, clearAddresses } from '@/lib/editor/commands/addressing';
+export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layout';
+export { applyPattern } from '@/lib/editor/commands/patterns';
