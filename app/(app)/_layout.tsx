@@ -1,5 +1,6 @@
-import { Redirect, Slot, usePathname } from 'expo-router';
-import { SessionLoading, SessionProblem } from '@/components/shell/SessionStates';
+import { Slot, usePathname } from 'expo-router';
+import { RouteFrame } from '@/components/shell/RouteFrame';
+import { SessionProblem } from '@/components/shell/SessionStates';
 import { SignedInShell } from '@/components/shell/SignedInShell';
 import { useMe } from '@/lib/api/auth';
 
@@ -7,12 +8,17 @@ import { useMe } from '@/lib/api/auth';
 export default function AppLayout() {
   const me = useMe();
   const pathname = usePathname();
-  if (me.isPending) return <SessionLoading />;
   if (me.isError) return <SessionProblem message={me.error.message} onRetry={() => void me.refetch()} />;
-  if (!me.data) return <Redirect href={{ pathname: '/sign-in', params: { next: pathname } }} />;
+  if (me.data) {
+    return (
+      <SignedInShell user={me.data}>
+        <Slot />
+      </SignedInShell>
+    );
+  }
   return (
-    <SignedInShell user={me.data}>
+    <RouteFrame loading hidden redirect={me.data === null ? { pathname: '/sign-in', params: { next: pathname } } : null}>
       <Slot />
-    </SignedInShell>
+    </RouteFrame>
   );
 }

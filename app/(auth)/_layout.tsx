@@ -1,6 +1,6 @@
-import { Redirect, Slot, useGlobalSearchParams, useSegments } from 'expo-router';
+import { Redirect, Slot, useGlobalSearchParams, usePathname } from 'expo-router';
 import type { Href } from 'expo-router';
-import { SessionLoading } from '@/components/shell/SessionStates';
+import { RouteFrame } from '@/components/shell/RouteFrame';
 import { useMe } from '@/lib/api/auth';
 import { safeNextPath } from '@/lib/navigation';
 
@@ -10,10 +10,12 @@ import { safeNextPath } from '@/lib/navigation';
  */
 export default function AuthLayout() {
   const me = useMe();
-  const segments = useSegments() as string[];
+  const onSignIn = usePathname() === '/sign-in';
   const { next } = useGlobalSearchParams<{ next?: string }>();
-  const onSignIn = segments[segments.length - 1] === 'sign-in';
-  if (onSignIn && me.isPending) return <SessionLoading />;
-  if (onSignIn && me.data) return <Redirect href={(safeNextPath(next) ?? '/designs') as Href} />;
-  return <Slot />;
+  const redirect = onSignIn && me.data ? ((safeNextPath(next) ?? '/designs') as Href) : null;
+  return (
+    <RouteFrame loading={onSignIn && me.isPending} redirect={redirect}>
+      <Slot />
+    </RouteFrame>
+  );
 }

@@ -4,6 +4,7 @@ import { Banner, Button, Card, EmptyState, Icon, Screen, Text, colors, space, TA
 import { useDevMail } from '@/lib/api/mail';
 import { formatDateTime } from '@/lib/format';
 import type { MailMessage } from '@/shared/api/team';
+import { usePressFeedback } from '@/lib/use-press-feedback';
 
 /** Every e-mail the app sent while running with its local mail sink, newest first. */
 export function MailboxScreen() {
@@ -34,13 +35,15 @@ export function MailboxScreen() {
 }
 
 function MessageRow({ message, first }: { message: MailMessage; first: boolean }) {
+  const { pressed, handlers } = usePressFeedback();
   return (
     <Link href={{ pathname: '/mailbox/[id]', params: { id: message.id } }} asChild>
       <Pressable
         role="link"
         testID="mail-row"
         aria-label={`${message.subject}, to ${message.to.join(', ')}`}
-        style={({ pressed }) => [styles.row, !first && styles.divider, pressed && styles.pressed]}
+        {...handlers}
+        style={StyleSheet.flatten([styles.row, !first && styles.divider, pressed && styles.pressed])}
       >
         <View style={styles.text}>
           <Text variant="bodyStrong" numberOfLines={2}>

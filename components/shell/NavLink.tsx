@@ -2,12 +2,14 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Icon, Text, colors, fonts, radius, space, TAP_TARGET } from '@/components/ui';
 import type { NavItem } from '@/lib/navigation';
+import { usePressFeedback } from '@/lib/use-press-feedback';
 
 type NavLinkProps = { item: NavItem; active: boolean; placement: 'tab' | 'sidebar' };
 
 /** One destination in the tab bar or the sidebar; a real link on the web (middle-click, new tab). */
 export function NavLink({ item, active, placement }: NavLinkProps) {
   const isTab = placement === 'tab';
+  const { pressed, handlers } = usePressFeedback();
   const textColor = isTab ? (active ? 'primary' : 'inkMuted') : active ? 'onSidebar' : 'onSidebarMuted';
   return (
     <Link href={item.href} asChild>
@@ -16,11 +18,12 @@ export function NavLink({ item, active, placement }: NavLinkProps) {
         role="link"
         aria-label={item.label}
         aria-current={active ? 'page' : undefined}
-        style={({ pressed }) => [
+        {...handlers}
+        style={StyleSheet.flatten([
           isTab ? styles.tab : styles.side,
           !isTab && active && styles.sideActive,
           pressed && (isTab ? styles.tabPressed : styles.sidePressed),
-        ]}
+        ])}
       >
         {isTab ? <View style={[styles.tabMarker, active && styles.tabMarkerActive]} /> : null}
         <Icon name={item.icon} size={isTab ? 24 : 22} color={isTab ? textColor : active ? 'copperSoft' : 'onSidebarMuted'} />

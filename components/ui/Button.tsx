@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
-import { ActivityIndicator, Pressable, StyleSheet, View, type PressableProps } from 'react-native';
+import { ActivityIndicator, Pressable, StyleSheet, View, type PressableProps, type StyleProp, type ViewStyle } from 'react-native';
+import { usePressFeedback } from '@/lib/use-press-feedback';
 import { Text } from '@/components/ui/Text';
 import { colors, radius, space, TAP_TARGET, type ColorName } from '@/components/ui/tokens';
 
@@ -14,6 +15,8 @@ type ButtonProps = Omit<PressableProps, 'children' | 'style'> & {
   icon?: ReactNode;
   fullWidth?: boolean;
   size?: 'regular' | 'compact';
+  /** Set by `<Link asChild>` when the button navigates; merged under the button's own look. */
+  style?: StyleProp<ViewStyle>;
 };
 
 const looks: Record<ButtonVariant, { bg: ColorName | null; pressed: ColorName | null; text: ColorName; border: ColorName | null }> = {
@@ -32,10 +35,14 @@ export function Button({
   fullWidth = false,
   size = 'regular',
   disabled,
+  style,
+  onPressIn,
+  onPressOut,
   ...rest
 }: ButtonProps) {
   const look = looks[variant];
   const inactive = Boolean(disabled) || loading;
+  const { pressed, handlers } = usePressFeedback(onPressIn, onPressOut);
   return (
     <Pressable
       role="button"
@@ -43,15 +50,17 @@ export function Button({
       aria-disabled={inactive}
       aria-busy={loading}
       disabled={inactive}
-      style={({ pressed }) => [
+      {...rest}
+      {...handlers}
+      style={StyleSheet.flatten([
+        style,
         styles.base,
         size === 'compact' && styles.compact,
         fullWidth && styles.fullWidth,
         { backgroundColor: pressed && look.pressed ? colors[look.pressed] : look.bg ? colors[look.bg] : 'transparent' },
         look.border && { borderColor: colors[look.border], borderWidth: 1 },
         inactive && styles.inactive,
-      ]}
-      {...rest}
+      ])}
     >
       <View style={styles.content}>
         {loading ? <ActivityIndicator size="small" color={colors[look.text]} /> : icon}

@@ -68,7 +68,12 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
     flexDirection: 'row',
     alignItems: 'center',
+    justifyContent: 'center',
     gap: space.xs,
+    // Two per row on a phone, all four in one row on wider screens: no orphan on a line of its own.
+    flexGrow: 1,
+    flexBasis: 120,
+    maxWidth: 200,
   },
   selected: { backgroundColor: colors.primary, borderColor: colors.primary },
   pressed: { backgroundColor: colors.surfaceSunken },

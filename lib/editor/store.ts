@@ -1,0 +1,243 @@
+import { temporal, type TemporalState } from 'zundo';
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import type { Connector, Media, Topology } from '@/shared/topology/schema';
+import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
+import { runCommand, type CablePortsArgs, type CommandArgs, type CommandName } from '@/lib/editor/commands';
+import { portById } from '@/lib/editor/commands/doc';
+import { CommandError } from '@/lib/editor/errors';
+import { collectIds } from '@/lib/editor/ids';
+import { DEFAULT_VIEWPORT, type Viewport } from '@/lib/editor/viewport';
+
+/**
+ * The editor's state: the working document and everything about editing it (selection, tool,
+ * viewport, the cable being drawn, remembered cable defaults, undo history). Server data stays in
+ * React Query; this store only holds what the designer is doing right now.
+ *
+ * History (zundo) records the document only, and only what commands produce: `load` (opening a
+ * version, a refresh from the server) clears it; selection, tool and viewport changes never enter
+ * it; a drag is one entry however many moves it makes (beginGesture … endGesture).
+ */
+export type Tool = 'select' | 'cable' | 'pan';
+export type DesignId = number | string;
+export type CableChoice = { media: Media; lengthM?: number };
+/** Remembered per connector: an RJ45 default is no use for SFP ports. */
+export type CableDefaults = Record<Connector, CableChoice>;
+export type RunResult = { ok: true; doc: Topology } | { ok: false; error: CommandError };
+
+export type EditorData = {
+  designId: DesignId | null;
+  /** The version the working copy started from; null for a design without versions yet. */
+  baseVersion: number | null;
+  doc: Topology;
+  /** The document as last loaded or saved; the working copy is dirty when `doc` differs. */
+  savedDoc: Topology;
+  readOnly: boolean;
+  /** Selected ids of any kind (devices, controllers, cards, ports, cables, networks). */
+  selection: string[];
+  tool: Tool;
+  /** The first port of a cable being drawn with the cable tool. */
+  pendingCableStart: string | null;
+  viewport: Viewport;
+  cableDefaults: CableDefaults;
+  /** The document when the current drag began; null outside a drag. */
+  gestureStart: Topology | null;
+  lastError: CommandError | null;
+  /** Counts `load` calls, so watchers can tell an opened document from an edited one. */
+  session: number;
+};
+
+export type LoadOptions = {
+  designId: DesignId | null;
+  baseVersion: number | null;
+  readOnly?: boolean;
+  viewport?: Viewport;
+  /**
+   * The server's document when `doc` is a restored working copy: the store then starts dirty
+   * against it. By default `doc` itself is the saved state.
+   */
+  savedDoc?: Topology;
+};
+
+export type EditorActions = {
+  load(doc: Topology, options: LoadOptions): void;
+  run<K extends CommandName>(name: K, args: CommandArgs[K]): RunResult;
+  undo(): void;
+  redo(): void;
+  beginGesture(): void;
+  endGesture(): void;
+  cancelGesture(): void;
+  select(ids: string[]): void;
+  toggleSelection(id: string): void;
+  clearSelection(): void;
+  setTool(tool: Tool): void;
+  startCable(portId: string): void;
+  cancelCable(): void;
+  /** Cables the pending start port to `portId` with the remembered defaults (or `choice`) and remembers the choice. */
+  finishCable(portId: string, choice?: Partial<CableChoice> & Pick<CablePortsArgs, 'label' | 'replace'>): RunResult;
+  setViewport(viewport: Viewport): void;
+  setCableDefaults(connector: Connector, choice: CableChoice): void;
+  /** After a successful save: the new base version, and the document that was sent (default: the current one). */
+  markSaved(baseVersion: number, savedDoc?: Topology): void;
+};
+
+export type EditorState = EditorData & EditorActions;
+type History = { doc: Topology };
+export type EditorStore = StoreApi<EditorState> & { temporal: StoreApi<TemporalState<History>> };
+
+export const HISTORY_LIMIT = 200;
+
+export function emptyTopology(name = 'Untitled design'): Topology {
+  return { format: TOPOLOGY_FORMAT, name, devices: [], cables: [], networks: [] };
+}
+
+// Category 6A carries 10GBASE-T over 100 m (IEEE 802.3an); direct-attach copper is the usual
+// short in-rack SFP link (common practice).
+export const DEFAULT_CABLE_CHOICES: CableDefaults = { rj45: { media: 'cat6a', lengthM: 3 }, sfp: { media: 'dac', lengthM: 3 } };
+
+function initialData(): EditorData {
+  const doc = emptyTopology();
+  return {
+    designId: null,
+    baseVersion: null,
+    doc,
+    savedDoc: doc,
+    readOnly: false,
+    selection: [],
+    tool: 'select',
+    pendingCableStart: null,
+    viewport: DEFAULT_VIEWPORT,
+    cableDefaults: DEFAULT_CABLE_CHOICES,
+    gestureStart: null,
+    lastError: null,
+    session: 0,
+  };
+}
+
+/** Selection and pending cable without ids the document no longer has (after delete, undo, redo). */
+function pruned(state: EditorData, doc: Topology): Partial<EditorData> {
+  const prev = state.doc;
+  const structural = prev.devices !== doc.devices || prev.cables !== doc.cables || prev.networks !== doc.networks;
+  if (!structural || (state.selection.length === 0 && state.pendingCableStart === null)) return {};
+  const ids = collectIds(doc);
+  const selection = state.selection.filter((id) => ids.has(id));
+  const pendingCableStart = state.pendingCableStart && ids.has(state.pendingCableStart) ? state.pendingCableStart : null;
+  return { selection: selection.length === state.selection.length ? state.selection : selection, pendingCableStart };
+}
+
+export function createEditorStore(): EditorStore {
+  let store: EditorStore;
+  const history = () => store.temporal.getState();
+
+  const creator = temporal<EditorState, [], [], History>(
+    (set, get) => {
+      const refuse = (error: CommandError): RunResult => {
+        set({ lastError: error });
+        return { ok: false, error };
+      };
+      const run = (name: string, args: unknown): RunResult => {
+        const state = get();
+        if (state.readOnly) return refuse(new CommandError('read-only', 'This version is read-only for you.'));
+        let doc: Topology;
+        try {
+          doc = runCommand(state.doc, name, args);
+        } catch (error) {
+          if (error instanceof CommandError) return refuse(error);
+          throw error;
+        }
+        if (doc !== state.doc) set({ doc, lastError: null, ...pruned(state, doc) });
+        else if (state.lastError) set({ lastError: null });
+        return { ok: true, doc };
+      };
+      const afterTimeTravel = (before: EditorData) => {
+        const extra = pruned(before, get().doc);
+        if (Object.keys(extra).length > 0) set(extra);
+      };
+      return {
+        ...initialData(),
+        load(doc, options) {
+          history().pause();
+          set({ ...initialData(), session: get().session + 1, doc, savedDoc: options.savedDoc ?? doc, designId: options.designId, baseVersion: options.baseVersion, readOnly: options.readOnly ?? false, viewport: options.viewport ?? DEFAULT_VIEWPORT, cableDefaults: get().cableDefaults, tool: get().tool === 'pan' ? 'pan' : 'select' });
+          history().clear();
+          history().resume();
+        },
+        run: run as EditorActions['run'],
+        undo() {
+          if (get().gestureStart) return;
+          const before = get();
+          history().undo();
+          afterTimeTravel(before);
+        },
+        redo() {
+          if (get().gestureStart) return;
+          const before = get();
+          history().redo();
+          afterTimeTravel(before);
+        },
+        beginGesture() {
+          if (get().readOnly || get().gestureStart) return;
+          set({ gestureStart: get().doc });
+          history().pause();
+        },
+        endGesture() {
+          const start = get().gestureStart;
+          if (!start) return;
+          history().resume();
+          set({ gestureStart: null });
+          if (get().doc === start) return;
+          // One entry for the whole drag: the document as it was when the drag began.
+          const { pastStates } = history();
+          const past = [...pastStates, { doc: start }].slice(-HISTORY_LIMIT);
+          store.temporal.setState({ pastStates: past, futureStates: [] });
+        },
+        cancelGesture() {
+          const start = get().gestureStart;
+          if (!start) return;
+          set({ doc: start, gestureStart: null });
+          history().resume();
+        },
+        select: (ids) => set({ selection: [...new Set(ids)] }),
+        toggleSelection(id) {
+          const selection = get().selection;
+          set({ selection: selection.includes(id) ? selection.filter((s) => s !== id) : [...selection, id] });
+        },
+        clearSelection: () => set({ selection: [] }),
+        setTool: (tool) => set({ tool, pendingCableStart: tool === 'cable' ? get().pendingCableStart : null }),
+        startCable: (portId) => set({ pendingCableStart: portId }),
+        cancelCable: () => set({ pendingCableStart: null }),
+        finishCable(portId, choice = {}) {
+          const start = get().pendingCableStart;
+          if (!start) return refuse(new CommandError('refused', 'Tap the port where the cable starts first.', 'a'));
+          let connector: Connector;
+          try {
+            connector = portById(get().doc, start, 'a').port.connector;
+          } catch (error) {
+            set({ pendingCableStart: null });
+            return refuse(error as CommandError);
+          }
+          const remembered = get().cableDefaults[connector];
+          const media = choice.media ?? remembered.media;
+          const lengthM = 'lengthM' in choice ? choice.lengthM : remembered.lengthM;
+          const result = run('cablePorts', { a: start, b: portId, media, lengthM, label: choice.label, replace: choice.replace });
+          if (result.ok) set({ pendingCableStart: null, cableDefaults: { ...get().cableDefaults, [connector]: { media, lengthM } } });
+          return result;
+        },
+        setViewport: (viewport) => set({ viewport }),
+        setCableDefaults: (connector, choice) => set({ cableDefaults: { ...get().cableDefaults, [connector]: choice } }),
+        markSaved: (baseVersion, savedDoc) => set({ baseVersion, savedDoc: savedDoc ?? get().doc }),
+      };
+    },
+    {
+      partialize: (state) => ({ doc: state.doc }),
+      // Only a new document is a step; selection, tool and viewport changes are not.
+      equality: (past, current) => past.doc === current.doc,
+      limit: HISTORY_LIMIT,
+    },
+  );
+  store = createStore<EditorState>()(creator) as EditorStore;
+  return store;
+}
+
+/** The editor store the canvas uses; tests make their own with createEditorStore(). */
+export const editorStore = createEditorStore();
+
+export const selectDirty = (state: EditorData): boolean => state.doc !== state.savedDoc;
