@@ -41,8 +41,9 @@ export function nextNumberedName(doc: Topology, prefix: string, taken: Set<strin
 
 /**
  * The next cable number: one above the highest `cable-N` id or `C<N>` label in the document.
- * Cable numbers are never reused inside a document, because a label may already be printed and
- * stuck on a cable in the room.
+ * A label may already be printed and stuck on a cable in the room, so a number must not come back
+ * for another cable: the document alone cannot remember a deleted newest cable, so the store keeps
+ * a floor across the session and the saved version (cablePorts' `numberFloor`).
  */
 export function nextCableNumber(doc: Topology): number {
   let highest = 0;

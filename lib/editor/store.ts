@@ -5,7 +5,7 @@ import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
 import { runCommand, type CablePortsArgs, type CommandArgs, type CommandName } from '@/lib/editor/commands';
 import { portById } from '@/lib/editor/commands/doc';
 import { CommandError } from '@/lib/editor/errors';
-import { collectIds } from '@/lib/editor/ids';
+import { collectIds, nextCableNumber } from '@/lib/editor/ids';
 import { DEFAULT_VIEWPORT, type Viewport } from '@/lib/editor/viewport';
 
 /**
@@ -44,6 +44,8 @@ export type EditorData = {
   lastError: CommandError | null;
   /** Counts `load` calls, so watchers can tell an opened document from an edited one. */
   session: number;
+  /** The next cable number never goes below this: numbers seen this session and in the saved version stay used. */
+  cableNumberFloor: number;
 };
 
 export type LoadOptions = {
@@ -110,6 +112,7 @@ function initialData(): EditorData {
     gestureStart: null,
     lastError: null,
     session: 0,
+    cableNumberFloor: 1,
   };
 }
 
@@ -138,13 +141,17 @@ export function createEditorStore(): EditorStore {
         const state = get();
         if (state.readOnly) return refuse(new CommandError('read-only', 'This version is read-only for you.'));
         let doc: Topology;
+        const withFloor = name === 'cablePorts' && (args as CablePortsArgs).numberFloor === undefined ? { ...(args as CablePortsArgs), numberFloor: state.cableNumberFloor } : args;
         try {
-          doc = runCommand(state.doc, name, args);
+          doc = runCommand(state.doc, name, withFloor);
         } catch (error) {
           if (error instanceof CommandError) return refuse(error);
           throw error;
         }
-        if (doc !== state.doc) set({ doc, lastError: null, ...pruned(state, doc) });
+        if (doc !== state.doc) {
+          const floor = doc.cables === state.doc.cables ? state.cableNumberFloor : Math.max(state.cableNumberFloor, nextCableNumber(doc));
+          set({ doc, lastError: null, cableNumberFloor: floor, ...pruned(state, doc) });
+        }
         else if (state.lastError) set({ lastError: null });
         return { ok: true, doc };
       };
@@ -156,7 +163,7 @@ export function createEditorStore(): EditorStore {
         ...initialData(),
         load(doc, options) {
           history().pause();
-          set({ ...initialData(), session: get().session + 1, doc, savedDoc: options.savedDoc ?? doc, designId: options.designId, baseVersion: options.baseVersion, readOnly: options.readOnly ?? false, viewport: options.viewport ?? DEFAULT_VIEWPORT, cableDefaults: get().cableDefaults, tool: get().tool === 'pan' ? 'pan' : 'select' });
+          set({ ...initialData(), session: get().session + 1, doc, savedDoc: options.savedDoc ?? doc, cableNumberFloor: Math.max(nextCableNumber(doc), nextCableNumber(options.savedDoc ?? doc)), designId: options.designId, baseVersion: options.baseVersion, readOnly: options.readOnly ?? false, viewport: options.viewport ?? DEFAULT_VIEWPORT, cableDefaults: get().cableDefaults, tool: get().tool === 'pan' ? 'pan' : 'select' });
           history().clear();
           history().resume();
         },

@@ -22,6 +22,11 @@ export type CablePortsArgs = {
   id?: string;
   /** Remove the cables already on either port first. */
   replace?: boolean;
+  /**
+   * The lowest cable number to use. The store passes the highest number it has seen this
+   * session and in the saved version, so deleting the newest cable never frees its number.
+   */
+  numberFloor?: number;
 };
 
 /**
@@ -40,8 +45,8 @@ export function suggestMedia(a: Port, b: Port, lengthM?: number): Media {
 }
 
 /** The id and label `cablePorts` gives the next cable, so the canvas can select it. */
-export function plannedCable(doc: Topology): { id: string; label: string } {
-  const n = nextCableNumber(doc);
+export function plannedCable(doc: Topology, numberFloor = 1): { id: string; label: string } {
+  const n = Math.max(nextCableNumber(doc), numberFloor);
   return { id: claimId(collectIds(doc), `cable-${n}`), label: cableLabel(n) };
 }
 
@@ -52,7 +57,7 @@ export function cablePorts(doc: Topology, args: CablePortsArgs): Topology {
   const twin = doc.cables.find((c) => (c.a === args.a && c.b === args.b) || (c.a === args.b && c.b === args.a));
   if (twin && !args.replace) throw new CommandError('refused', `These two ports are already joined by ${twin.label ?? twin.id}.`, 'b');
   const base = args.replace ? { ...doc, cables: doc.cables.filter((c) => ![c.a, c.b].some((end) => end === args.a || end === args.b)) } : doc;
-  const n = nextCableNumber(doc);
+  const n = Math.max(nextCableNumber(doc), args.numberFloor ?? 1);
   const cable: Cable = {
     id: claimId(collectIds(base), args.id ?? `cable-${n}`),
     label: args.label ?? cableLabel(n),
@@ -82,7 +87,8 @@ export type SetCableArgs = { id: string; media?: Media; lengthM?: number | null;
 export function setCable(doc: Topology, args: SetCableArgs): Topology {
   const index = doc.cables.findIndex((c) => c.id === args.id);
   if (index < 0) throw new CommandError('not-found', `There is no cable "${args.id}" in this design.`, 'id');
-  const label = typeof args.label === 'string' && args.label.trim() === '' ? null : args.label?.trim();
+  // An emptied label field removes the label; the schedule then falls back to the cable id.
+  const label = typeof args.label === 'string' ? args.label.trim() || null : args.label;
   const next = patch(doc.cables[index], { media: args.media, lengthM: args.lengthM, label });
   if (next === doc.cables[index]) return doc;
   const cables = doc.cables.slice();
@@ -98,7 +104,7 @@ export const cablingCommands = [
   command(
     'cablePorts',
     'Cable two ports',
-    z.object({ a: id, b: id, media: z.enum(MEDIA).optional(), lengthM: length.optional(), label: label.optional(), id: id.max(200).optional(), replace: z.boolean().optional() }).strict(),
+    z.object({ a: id, b: id, media: z.enum(MEDIA).optional(), lengthM: length.optional(), label: label.optional(), id: id.max(200).optional(), replace: z.boolean().optional(), numberFloor: z.number().int().positive().optional() }).strict(),
     cablePorts,
   ),
   command('uncable', 'Remove cables', z.object({ ids: z.array(z.string()) }).strict(), uncable),

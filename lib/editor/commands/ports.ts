@@ -100,25 +100,31 @@ export function addPort(doc: Topology, args: AddPortArgs): Topology {
   if (kind !== 'device' && kind !== 'controller' && kind !== 'adapter') {
     throw new CommandError(kind ? 'wrong-kind' : 'not-found', 'Ports are added to a switch, a controller or a card.', 'ownerId');
   }
-  const build = (siblings: Port[], defaultRole: PortRole): Port => {
-    const model = siblings[siblings.length - 1];
+  // A new port copies the last sibling of its role (a data port must not copy a 1G management port).
+  const build = (siblings: Port[], defaultRole: PortRole): Port[] => {
+    const role = args.role ?? defaultRole;
+    const model = [...siblings].reverse().find((p) => p.role === role) ?? siblings[siblings.length - 1];
     const names = new Set(siblings.map((p) => p.name));
-    let n = siblings.length + 1;
+    let n = 1;
     while (names.has(`p${n}`)) n += 1;
-    return makePort(collectIds(doc), args.ownerId, {
+    const port = makePort(collectIds(doc), args.ownerId, {
       name: args.name ?? `p${n}`,
-      role: args.role ?? model?.role ?? defaultRole,
+      role,
       speedGbps: args.speedGbps ?? model?.speedGbps ?? 10,
       connector: args.connector ?? model?.connector ?? 'rj45',
     });
+    // Data ports go before trailing management ports, so `mgmt` stays drawn last.
+    let at = siblings.length;
+    if (role === 'data') while (at > 0 && siblings[at - 1].role === 'management') at -= 1;
+    return [...siblings.slice(0, at), port, ...siblings.slice(at)];
   };
   if (kind === 'device') {
     const device = deviceById(doc, args.ownerId);
     if (device.kind !== 'switch') throw new CommandError('wrong-kind', 'Add ports to one of its controllers or cards, not to the device itself.', 'ownerId');
-    const port = build(device.ports, device.role === 'management' ? 'management' : 'data');
-    return replaceDevice(doc, device.id, (d) => (d.kind === 'switch' ? { ...d, ports: [...d.ports, port] } : d));
+    const ports = build(device.ports, device.role === 'management' ? 'management' : 'data');
+    return replaceDevice(doc, device.id, (d) => (d.kind === 'switch' ? { ...d, ports } : d));
   }
-  return mapGroups(doc, (g) => (g.id === args.ownerId ? { ...g, ports: [...g.ports, build(g.ports, 'data')] } : g));
+  return mapGroups(doc, (g) => (g.id === args.ownerId ? { ...g, ports: build(g.ports, 'data') } : g));
 }
 
 export function removePort(doc: Topology, args: { id: string }): Topology {
