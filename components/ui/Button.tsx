@@ -81,6 +81,8 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
     alignItems: 'center',
     justifyContent: 'center',
+    // As wide as its label unless asked to fill: a lone button in a column should not become a bar.
+    alignSelf: 'flex-start',
   },
   compact: { paddingHorizontal: space.md },
   fullWidth: { alignSelf: 'stretch' },

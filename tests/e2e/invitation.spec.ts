@@ -14,6 +14,9 @@ test('an admin invites a reviewer, who follows the e-mailed link and lands signe
   await expect(page.getByTestId('invite-sent')).toContainText(email);
   await expect(page.getByTestId('team-invitations')).toContainText(email);
   await shot(page, testInfo, 'team');
+  // The screen scrolls inside the app, so bring the lists into view for a second look.
+  await page.getByTestId('team-invitations').scrollIntoViewIfNeeded();
+  await shot(page, testInfo, 'team-invitations');
 
   await page.getByTestId('nav-mailbox').click();
   const row = page.getByTestId('mail-row').filter({ hasText: email }).first();
