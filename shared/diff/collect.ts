@@ -1,30 +1,52 @@
 import type { GroupKind } from '@/shared/diff/types';
-import { displayName, indexTopology, type PortRef, type TopologyIndex } from '@/shared/topology';
-import type { Adapter, Controller, Device, Topology } from '@/shared/topology/schema';
+import { displayName } from '@/shared/topology';
+import type { Adapter, Cable, Controller, Device, Network, Port, Topology } from '@/shared/topology/schema';
 
 /**
- * One version's things, keyed by id, in the shape the section specs compare. Built once per
- * version with the shared topology index, so the whole diff is a few linear passes plus sorting.
- * Ids are unique across a valid document (the schema's validator checks it); on an invalid one the
- * last thing with a repeated id wins, as in the index.
+ * One version's things, keyed by id, in the shape the section specs compare. One pass over the
+ * document with no per-port strings built (the shared topology index also makes document paths and
+ * cable-by-port lists, which a diff of 100,000 ports does not need). Ids are unique across a valid
+ * document (the validator checks it); on an invalid one the last thing with a repeated id wins.
  */
 export type GroupItem = { group: Controller | Adapter; kind: GroupKind; device: Device };
+export type PortItem = { port: Port; device: Device; group?: Controller | Adapter };
 
 export type Collected = {
-  index: TopologyIndex;
+  devices: Map<string, Device>;
   groups: Map<string, GroupItem>;
+  ports: Map<string, PortItem>;
   /** Ports that carry an address, by port id. */
-  addressed: Map<string, PortRef>;
+  addressed: Map<string, PortItem>;
+  cables: Map<string, Cable>;
+  networks: Map<string, Network>;
 };
 
+function addPorts(into: Collected, ports: Port[], device: Device, group?: Controller | Adapter) {
+  for (const port of ports) {
+    const item: PortItem = { port, device, group };
+    into.ports.set(port.id, item);
+    if (port.address) into.addressed.set(port.id, item);
+  }
+}
+
 export function collect(doc: Topology): Collected {
-  const index = indexTopology(doc);
-  const groups = new Map<string, GroupItem>();
-  for (const [id, { controller, array }] of index.controllers) groups.set(id, { group: controller, kind: 'controller', device: array });
-  for (const [id, { adapter, host }] of index.adapters) groups.set(id, { group: adapter, kind: 'adapter', device: host });
-  const addressed = new Map<string, PortRef>();
-  for (const [id, ref] of index.ports) if (ref.port.address) addressed.set(id, ref);
-  return { index, groups, addressed };
+  const into: Collected = { devices: new Map(), groups: new Map(), ports: new Map(), addressed: new Map(), cables: new Map(), networks: new Map() };
+  for (const device of doc.devices) {
+    into.devices.set(device.id, device);
+    if (device.kind === 'switch') {
+      addPorts(into, device.ports, device);
+      continue;
+    }
+    const groups = device.kind === 'array' ? device.controllers : device.adapters;
+    const kind: GroupKind = device.kind === 'array' ? 'controller' : 'adapter';
+    for (const group of groups) {
+      into.groups.set(group.id, { group, kind, device });
+      addPorts(into, group.ports, device, group);
+    }
+  }
+  for (const cable of doc.cables) into.cables.set(cable.id, cable);
+  for (const network of doc.networks) into.networks.set(network.id, network);
+  return into;
 }
 
 /** "wms-db-1 / card-1": a controller or card named with its device. */
@@ -33,25 +55,25 @@ export function groupLabel(item: GroupItem): string {
 }
 
 /** "wms-db-1 / card-1 p1", or "fab-b / p10" for a switch port: how an installer finds the port. */
-export function portLabel(ref: PortRef): string {
-  const group = ref.adapter ?? ref.controller;
+export function portLabel(ref: PortItem): string {
+  const group = ref.group;
   const device = displayName(ref.device);
   return group ? `${device} / ${displayName(group)} ${displayName(ref.port)}` : `${device} / ${displayName(ref.port)}`;
 }
 
 /** A port id as its label in one version; the bare id when that version has no such port. */
 export function portIdLabel(side: Collected, portId: string): string {
-  const ref = side.index.ports.get(portId);
+  const ref = side.ports.get(portId);
   return ref ? portLabel(ref) : portId;
 }
 
 export function deviceIdName(side: Collected, deviceId: string): string {
-  const device = side.index.devices.get(deviceId);
+  const device = side.devices.get(deviceId);
   return device ? displayName(device) : deviceId;
 }
 
 export function networkIdName(side: Collected, networkId: string): string {
-  const network = side.index.networks.get(networkId);
+  const network = side.networks.get(networkId);
   return network ? displayName(network) : networkId;
 }
 

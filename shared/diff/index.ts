@@ -41,11 +41,11 @@ export function diffTopologies(before: Topology, after: Topology): TopologyDiff 
     { items: pick(a), side: a },
   ] as const;
   const sections = {
-    devices: compareSection(deviceSection, ...versions((s) => s.index.devices)),
+    devices: compareSection(deviceSection, ...versions((s) => s.devices)),
     groups: compareSection(groupSection, ...versions((s) => s.groups)),
-    ports: compareSection(portSection, ...versions((s) => s.index.ports)),
-    cables: compareSection(cableSection, ...versions((s) => s.index.cables)),
-    networks: compareSection(networkSection, ...versions((s) => s.index.networks)),
+    ports: compareSection(portSection, ...versions((s) => s.ports)),
+    cables: compareSection(cableSection, ...versions((s) => s.cables)),
+    networks: compareSection(networkSection, ...versions((s) => s.networks)),
     addresses: compareSection(addressSection, ...versions((s) => s.addressed)),
   };
   const document = documentChanges(before, after);

@@ -8,6 +8,7 @@ import {
   portLabel,
   type Collected,
   type GroupItem,
+  type PortItem,
 } from '@/shared/diff/collect';
 import type { FieldSpec, SectionSpec } from '@/shared/diff/compare';
 import type {
@@ -18,7 +19,7 @@ import type {
   GroupDiffEntry,
   PortDiffEntry,
 } from '@/shared/diff/types';
-import { displayName, type PortRef } from '@/shared/topology';
+import { displayName } from '@/shared/topology';
 import type { Address, Cable, Device, Network } from '@/shared/topology/schema';
 
 /**
@@ -65,7 +66,7 @@ export const groupSection: SectionSpec<GroupItem, Collected, GroupDiffEntry> = {
   describe: (id, g) => ({ id, name: groupLabel(g), kind: g.kind, device: displayName(g.device) }),
 };
 
-const portFields: Field<PortRef>[] = [
+const portFields: Field<PortItem>[] = [
   { field: 'name', key: (r) => r.port.name },
   { field: 'role', key: (r) => r.port.role },
   { field: 'speedGbps', key: (r) => r.port.speedGbps },
@@ -73,15 +74,10 @@ const portFields: Field<PortRef>[] = [
   { field: 'network', key: (r) => opt(r.port.networkId), show: (r, side) => (r.port.networkId ? networkIdName(side, r.port.networkId) : null) },
   // A port that moved to another card or device keeps its id; these say where it went.
   { field: 'device', key: (r) => r.device.id, show: (r, side) => deviceIdName(side, r.device.id) },
-  { field: 'group', key: (r) => (r.adapter ?? r.controller)?.id ?? null, show: (r, side) => groupOf(r, side) },
+  { field: 'group', key: (r) => r.group?.id ?? null, show: (r, side) => (r.group ? groupIdName(side, r.group.id) : null) },
 ];
 
-function groupOf(ref: PortRef, side: Collected): DiffValue {
-  const group = ref.adapter ?? ref.controller;
-  return group ? groupIdName(side, group.id) : null;
-}
-
-export const portSection: SectionSpec<PortRef, Collected, PortDiffEntry> = {
+export const portSection: SectionSpec<PortItem, Collected, PortDiffEntry> = {
   fields: portFields,
   describe: (id, r) => ({ id, name: portLabel(r), device: displayName(r.device) }),
 };
@@ -92,7 +88,7 @@ function addressValue(address: Address | undefined): DiffValue {
   return address.mode === 'static' ? address.ip : 'dhcp';
 }
 
-export const addressSection: SectionSpec<PortRef, Collected, AddressDiffEntry> = {
+export const addressSection: SectionSpec<PortItem, Collected, AddressDiffEntry> = {
   fields: [{ field: 'address', key: (r) => addressValue(r.port.address), equal: sameIp }],
   describe: (id, r) => ({ id, name: portLabel(r), device: displayName(r.device) }),
 };
