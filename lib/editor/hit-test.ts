@@ -37,9 +37,11 @@ export function hitTest(snapshot: Snapshot, point: Point, options: HitOptions = 
   for (let i = boxes.length - 1; i >= 0; i -= 1) {
     const box = boxes[i];
     if (!rectContains(box.rect, point)) continue;
-    const port = box.ports.find((p) => rectContains(p.target, point));
+    // Shapes are in device coordinates: move the point there instead of moving every port.
+    const local = { x: point.x - box.position.x, y: point.y - box.position.y };
+    const port = box.shape.ports.find((p) => rectContains(p.target, local));
     if (port) return { kind: 'port', id: port.id, deviceId: box.id };
-    const group = box.groups.find((g) => rectContains(g.rect, point));
+    const group = box.shape.groups.find((g) => rectContains(g.rect, local));
     if (group) return { kind: 'group', id: group.id, deviceId: box.id };
     return { kind: 'device', id: box.id };
   }

@@ -2,9 +2,12 @@ import type { Cable, Device, Position, SwitchRole, Topology } from '@/shared/top
 import { deviceShape, type DeviceShape, type Point, type Rect } from '@/lib/editor/shape';
 
 /**
- * The render snapshot: every device's box, group boxes, port rectangles, tap targets and anchors,
- * and every cable's two end points, in world coordinates. The canvas draws it and hit-tests
- * against it; it never computes geometry itself.
+ * The render snapshot: every device's box and position, and every cable's two end points, in world
+ * coordinates. A device's inside (header, controllers or cards, ports, tap targets) is its shape
+ * in the device's own coordinates, computed once per device object: the canvas draws it inside a
+ * group translated to `position`, so moving a device changes one transform and nothing inside.
+ * World coordinates of a part are computed on demand (portBox, groupBox). The canvas draws the
+ * snapshot and hit-tests against it; it never computes geometry itself.
  *
  * Building is incremental: pass the previous snapshot and every device box whose device object and
  * position are unchanged is reused as is (same identity, so a memoised component skips it), and so
@@ -31,13 +34,14 @@ export type DeviceBox = {
   name: string;
   switchRole?: SwitchRole;
   source: Device;
+  /** Top-left corner in the world; the shape is drawn translated by it. */
   position: Point;
   rect: Rect;
-  header: Rect;
-  groups: GroupBox[];
-  ports: PortBox[];
+  /** Header, groups and ports in the device's own coordinates. */
+  shape: DeviceShape;
 };
 export type CableLine = { id: string; source: Cable; a: Point; b: Point; aPort: string; bPort: string; aDevice: string; bDevice: string };
+export type PartRef = { deviceId: string; kind: 'port' | 'group'; index: number };
 
 export type Snapshot = {
   /** The document this snapshot was built from. */
@@ -45,8 +49,8 @@ export type Snapshot = {
   /** Device boxes in document order (later ones are drawn on top). */
   devices: ReadonlyMap<string, DeviceBox>;
   cables: ReadonlyMap<string, CableLine>;
-  /** Port id → its device and its index in that device's `ports`. */
-  portOwner: ReadonlyMap<string, { deviceId: string; index: number }>;
+  /** Port and group ids → their device and index in its shape. */
+  parts: ReadonlyMap<string, PartRef>;
   cablesByDevice: ReadonlyMap<string, readonly string[]>;
   /** The union of all device boxes; null for an empty design. */
   bounds: Rect | null;
@@ -55,9 +59,8 @@ export type Snapshot = {
 /** Room left between devices placed automatically because the layout has no position for them. */
 const UNPLACED_GAP = 40;
 
-function boxAt(device: Device, shape: DeviceShape, position: Point): DeviceBox {
-  const { x, y } = position;
-  const move = (r: Rect): Rect => ({ x: r.x + x, y: r.y + y, width: r.width, height: r.height });
+function boxAt(device: Device, position: Point): DeviceBox {
+  const shape = deviceShape(device);
   return {
     id: device.id,
     kind: device.kind,
@@ -65,19 +68,27 @@ function boxAt(device: Device, shape: DeviceShape, position: Point): DeviceBox {
     switchRole: device.kind === 'switch' ? device.role : undefined,
     source: device,
     position,
-    rect: { x, y, width: shape.width, height: shape.height },
-    header: move(shape.header),
-    groups: shape.groups.map((g) => ({ id: g.id, deviceId: device.id, name: g.name, rect: move(g.rect) })),
-    ports: shape.ports.map((p) => ({
-      id: p.id,
-      deviceId: device.id,
-      groupId: p.groupId,
-      name: p.name,
-      role: p.role,
-      rect: move(p.rect),
-      target: move(p.target),
-      anchor: { x: p.anchor.x + x, y: p.anchor.y + y },
-    })),
+    rect: { x: position.x, y: position.y, width: shape.width, height: shape.height },
+    shape,
+  };
+}
+
+/** A rectangle of a device's shape in world coordinates. */
+export function toWorld(box: DeviceBox, rect: Rect): Rect {
+  return { x: rect.x + box.position.x, y: rect.y + box.position.y, width: rect.width, height: rect.height };
+}
+
+function worldPort(box: DeviceBox, index: number): PortBox {
+  const p = box.shape.ports[index];
+  return {
+    id: p.id,
+    deviceId: box.id,
+    groupId: p.groupId,
+    name: p.name,
+    role: p.role,
+    rect: toWorld(box, p.rect),
+    target: toWorld(box, p.target),
+    anchor: { x: p.anchor.x + box.position.x, y: p.anchor.y + box.position.y },
   };
 }
 
@@ -114,15 +125,17 @@ function samePoint(a: Point, b: Point): boolean {
   return a.x === b.x && a.y === b.y;
 }
 
-function indexPorts(doc: Topology): Map<string, { deviceId: string; index: number }> {
-  const owners = new Map<string, { deviceId: string; index: number }>();
+function indexParts(doc: Topology): Map<string, PartRef> {
+  const parts = new Map<string, PartRef>();
   for (const device of doc.devices) {
-    deviceShape(device).ports.forEach((p, index) => owners.set(p.id, { deviceId: device.id, index }));
+    const shape = deviceShape(device);
+    shape.groups.forEach((g, index) => parts.set(g.id, { deviceId: device.id, kind: 'group', index }));
+    shape.ports.forEach((p, index) => parts.set(p.id, { deviceId: device.id, kind: 'port', index }));
   }
-  return owners;
+  return parts;
 }
 
-function indexCables(doc: Topology, owners: Snapshot['portOwner']): Map<string, string[]> {
+function indexCables(doc: Topology, owners: Snapshot['parts']): Map<string, string[]> {
   const byDevice = new Map<string, string[]>();
   const add = (deviceId: string | undefined, cableId: string) => {
     if (!deviceId) return;
@@ -137,13 +150,20 @@ function indexCables(doc: Topology, owners: Snapshot['portOwner']): Map<string, 
   return byDevice;
 }
 
-function lineFor(cable: Cable, devices: ReadonlyMap<string, DeviceBox>, owners: Snapshot['portOwner']): CableLine | null {
-  const a = owners.get(cable.a);
-  const b = owners.get(cable.b);
-  const portA = a && devices.get(a.deviceId)?.ports[a.index];
-  const portB = b && devices.get(b.deviceId)?.ports[b.index];
-  if (!a || !b || !portA || !portB) return null;
-  return { id: cable.id, source: cable, a: portA.anchor, b: portB.anchor, aPort: cable.a, bPort: cable.b, aDevice: a.deviceId, bDevice: b.deviceId };
+function anchorOf(devices: ReadonlyMap<string, DeviceBox>, ref: PartRef | undefined): Point | null {
+  if (!ref || ref.kind !== 'port') return null;
+  const box = devices.get(ref.deviceId);
+  const local = box?.shape.ports[ref.index];
+  return box && local ? { x: local.anchor.x + box.position.x, y: local.anchor.y + box.position.y } : null;
+}
+
+function lineFor(cable: Cable, devices: ReadonlyMap<string, DeviceBox>, parts: Snapshot['parts']): CableLine | null {
+  const refA = parts.get(cable.a);
+  const refB = parts.get(cable.b);
+  const a = anchorOf(devices, refA);
+  const b = anchorOf(devices, refB);
+  if (!a || !b) return null;
+  return { id: cable.id, source: cable, a, b, aPort: cable.a, bPort: cable.b, aDevice: refA!.deviceId, bDevice: refB!.deviceId };
 }
 
 export function boundsOf(devices: Iterable<DeviceBox>): Rect | null {
@@ -163,9 +183,9 @@ export function boundsOf(devices: Iterable<DeviceBox>): Rect | null {
 /** The snapshot of a document, reusing whatever of `previous` is still right. */
 export function buildSnapshot(doc: Topology, previous?: Snapshot): Snapshot {
   const sameDevices = previous !== undefined && previous.doc.devices === doc.devices;
-  const portOwner = sameDevices ? previous.portOwner : indexPorts(doc);
+  const parts = sameDevices ? previous.parts : indexParts(doc);
   const sameCables = sameDevices && previous.doc.cables === doc.cables;
-  const cablesByDevice = sameCables ? previous.cablesByDevice : indexCables(doc, portOwner);
+  const cablesByDevice = sameCables ? previous.cablesByDevice : indexCables(doc, parts);
 
   const positions = resolvePositions(doc);
   const devices = new Map<string, DeviceBox>();
@@ -177,7 +197,7 @@ export function buildSnapshot(doc: Topology, previous?: Snapshot): Snapshot {
       devices.set(device.id, old);
       reused.add(device.id);
     } else {
-      devices.set(device.id, boxAt(device, deviceShape(device), position));
+      devices.set(device.id, boxAt(device, position));
     }
   }
 
@@ -185,10 +205,10 @@ export function buildSnapshot(doc: Topology, previous?: Snapshot): Snapshot {
   for (const cable of doc.cables) {
     const old = previous?.cables.get(cable.id);
     const keep = old && old.source === cable && reused.has(old.aDevice) && reused.has(old.bDevice);
-    const line = keep ? old : lineFor(cable, devices, portOwner);
+    const line = keep ? old : lineFor(cable, devices, parts);
     if (line) cables.set(cable.id, line);
   }
-  return { doc, devices, cables, portOwner, cablesByDevice, bounds: boundsOf(devices.values()) };
+  return { doc, devices, cables, parts, cablesByDevice, bounds: boundsOf(devices.values()) };
 }
 
 /**
@@ -203,21 +223,41 @@ export function withMovedDevices(snapshot: Snapshot, moves: Readonly<Record<stri
     const box = devices.get(id);
     if (!box || samePoint(box.position, position)) continue;
     moved = true;
-    devices.set(id, boxAt(box.source, deviceShape(box.source), { x: position.x, y: position.y }));
+    devices.set(id, boxAt(box.source, { x: position.x, y: position.y }));
     for (const cableId of snapshot.cablesByDevice.get(id) ?? []) touched.add(cableId);
   }
   if (!moved) return snapshot;
   const cables = new Map(snapshot.cables);
   for (const cableId of touched) {
     const line = cables.get(cableId);
-    const next = line && lineFor(line.source, devices, snapshot.portOwner);
+    const next = line && lineFor(line.source, devices, snapshot.parts);
     if (next) cables.set(cableId, next);
   }
   return { ...snapshot, devices, cables, bounds: boundsOf(devices.values()) };
 }
 
-/** A port's box in the snapshot, or undefined for an unknown id. */
+/** A port in world coordinates, or undefined for an unknown id. */
 export function portBox(snapshot: Snapshot, portId: string): PortBox | undefined {
-  const owner = snapshot.portOwner.get(portId);
-  return owner ? snapshot.devices.get(owner.deviceId)?.ports[owner.index] : undefined;
+  const ref = snapshot.parts.get(portId);
+  const box = ref?.kind === 'port' ? snapshot.devices.get(ref.deviceId) : undefined;
+  return box ? worldPort(box, ref!.index) : undefined;
+}
+
+/** A controller or card in world coordinates, or undefined for an unknown id. */
+export function groupBox(snapshot: Snapshot, groupId: string): GroupBox | undefined {
+  const ref = snapshot.parts.get(groupId);
+  const box = ref?.kind === 'group' ? snapshot.devices.get(ref.deviceId) : undefined;
+  if (!box) return undefined;
+  const g = box.shape.groups[ref!.index];
+  return { id: g.id, deviceId: box.id, name: g.name, rect: toWorld(box, g.rect) };
+}
+
+/** Every port of a device in world coordinates (for overlays; the canvas draws the shape instead). */
+export function devicePorts(box: DeviceBox): PortBox[] {
+  return box.shape.ports.map((_, index) => worldPort(box, index));
+}
+
+/** The world rectangle of whatever an id names: device, controller, card or port (centre a finding on it). */
+export function boxOf(snapshot: Snapshot, id: string): Rect | undefined {
+  return snapshot.devices.get(id)?.rect ?? portBox(snapshot, id)?.target ?? groupBox(snapshot, id)?.rect;
 }

@@ -6,3 +6,4 @@ export { addNetwork, removeNetwork, renameDesign, setChap, updateNetwork } from 
 export { autoAssignAddresses, clearAddresses } from '@/lib/editor/commands/addressing';
 export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layout';
 export { applyPattern } from '@/lib/editor/commands/patterns';
+export { deleteItems } from '@/lib/editor/commands/selection';

@@ -123,3 +123,23 @@ describe('deleting devices', () => {
     expect(apply(doc, 'deleteDevices', { ids: ['host-9'] })).toBe(doc);
   });
 });
+
+describe('deleting a mixed selection', () => {
+  it('removes cables, devices, parts and networks in one step, skipping what went along', () => {
+    let doc = apply(smallDesign(), 'cablePorts', { a: 'host-1-card-1-p1', b: 'switch-1-p1' });
+    doc = apply(doc, 'cablePorts', { a: 'host-2-card-1-p1', b: 'switch-1-p2' });
+    doc = apply(doc, 'addNetwork', { name: 'fabric A', purpose: 'data', cidr: '198.51.100.0/24' }); // RFC 5737
+    doc = apply(doc, 'deleteItems', { ids: ['cable-2', 'host-1', 'host-1-card-1-p1', 'host-2-card-2', 'switch-2-p3', 'net-fabric-a', 'gone'] });
+    expect(doc.cables).toEqual([]);
+    expect(doc.networks).toEqual([]);
+    expect(doc.devices.map((d) => d.id)).toEqual(['array-1', 'switch-1', 'switch-2', 'host-2']);
+    const host = device(doc, 'host-2');
+    expect(host.kind === 'host' && host.adapters.map((a) => a.name)).toEqual(['card-1', 'onboard']);
+    const sw = device(doc, 'switch-2');
+    expect(sw.kind === 'switch' && sw.ports.length).toBe(11);
+  });
+
+  it('refuses to take the last controller of an array', () => {
+    expect(refusal(() => apply(smallDesign(), 'deleteItems', { ids: ['array-1-ctl-a', 'array-1-ctl-b'] })).code).toBe('refused');
+  });
+});
