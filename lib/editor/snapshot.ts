@@ -1,4 +1,5 @@
-import type { Cable, Device, Position, SwitchRole, Topology } from '@/shared/topology/schema';
+import type { Cable, Device, SwitchRole, Topology } from '@/shared/topology/schema';
+import { boundsOf, resolvePositions } from '@/lib/editor/positions';
 import { deviceShape, type DeviceShape, type Point, type Rect } from '@/lib/editor/shape';
 
 /**
@@ -56,9 +57,6 @@ export type Snapshot = {
   bounds: Rect | null;
 };
 
-/** Room left between devices placed automatically because the layout has no position for them. */
-const UNPLACED_GAP = 40;
-
 function boxAt(device: Device, position: Point): DeviceBox {
   const shape = deviceShape(device);
   return {
@@ -90,35 +88,6 @@ function worldPort(box: DeviceBox, index: number): PortBox {
     target: toWorld(box, p.target),
     anchor: { x: p.anchor.x + box.position.x, y: p.anchor.y + box.position.y },
   };
-}
-
-/**
- * Positions of all devices: the layout's, and for devices it lacks, a row under everything placed
- * (deterministic, so a document without layout still draws without overlaps).
- */
-export function resolvePositions(doc: Topology): Map<string, Point> {
-  const layout: Record<string, Position> = doc.layout ?? {};
-  const positions = new Map<string, Point>();
-  let bottom = -Infinity;
-  let left = Infinity;
-  const unplaced: Device[] = [];
-  for (const device of doc.devices) {
-    const p = layout[device.id];
-    if (!p) {
-      unplaced.push(device);
-      continue;
-    }
-    positions.set(device.id, p);
-    bottom = Math.max(bottom, p.y + deviceShape(device).height);
-    left = Math.min(left, p.x);
-  }
-  let x = Number.isFinite(left) ? left : 0;
-  const y = Number.isFinite(bottom) ? bottom + 2 * UNPLACED_GAP : 0;
-  for (const device of unplaced) {
-    positions.set(device.id, { x, y });
-    x += deviceShape(device).width + UNPLACED_GAP;
-  }
-  return positions;
 }
 
 function samePoint(a: Point, b: Point): boolean {
@@ -164,20 +133,6 @@ function lineFor(cable: Cable, devices: ReadonlyMap<string, DeviceBox>, parts: S
   const b = anchorOf(devices, refB);
   if (!a || !b) return null;
   return { id: cable.id, source: cable, a, b, aPort: cable.a, bPort: cable.b, aDevice: refA!.deviceId, bDevice: refB!.deviceId };
-}
-
-export function boundsOf(devices: Iterable<DeviceBox>): Rect | null {
-  let minX = Infinity;
-  let minY = Infinity;
-  let maxX = -Infinity;
-  let maxY = -Infinity;
-  for (const { rect } of devices) {
-    minX = Math.min(minX, rect.x);
-    minY = Math.min(minY, rect.y);
-    maxX = Math.max(maxX, rect.x + rect.width);
-    maxY = Math.max(maxY, rect.y + rect.height);
-  }
-  return Number.isFinite(minX) ? { x: minX, y: minY, width: maxX - minX, height: maxY - minY } : null;
 }
 
 /** The snapshot of a document, reusing whatever of `previous` is still right. */
@@ -261,3 +216,5 @@ export function devicePorts(box: DeviceBox): PortBox[] {
 export function boxOf(snapshot: Snapshot, id: string): Rect | undefined {
   return snapshot.devices.get(id)?.rect ?? portBox(snapshot, id)?.target ?? groupBox(snapshot, id)?.rect;
 }
+
+export { boundsOf, resolvePositions };
