@@ -8,6 +8,8 @@ export interface UserRow extends Model<InferAttributes<UserRow>, InferCreationAt
   name: string;
   role: Role;
   passwordHash: string;
+  /** Set when an admin removed the member: the row stays so versions and reviews keep their names. */
+  removedAt: CreationOptional<Date | null>;
   createdAt: CreationOptional<Date>;
   updatedAt: CreationOptional<Date>;
 }
@@ -30,6 +32,7 @@ export function defineUser(sequelize: Sequelize): ModelStatic<UserRow> {
       name: { type: DataTypes.STRING(120), allowNull: false },
       role: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [ROLES as unknown as string[]] } },
       passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+      removedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -10,7 +10,8 @@ export const WRONG_CREDENTIALS = 'That e-mail and password do not match an accou
 export function createAuthService({ models, passwords }: Pick<ServiceDeps, 'models' | 'passwords'>) {
   return {
     async signIn({ email, password }: SignInBody): Promise<Result<User>> {
-      const user = await models.User.findOne({ where: { email } });
+      // A removed member's row stays (they remain named on versions) but no longer signs in.
+      const user = await models.User.findOne({ where: { email, removedAt: null } });
       const matches = await passwords.verify(password, user?.passwordHash ?? null);
       if (!user || !matches) return fail('unauthorized', WRONG_CREDENTIALS);
       return ok(toUser(user));
@@ -19,7 +20,7 @@ export function createAuthService({ models, passwords }: Pick<ServiceDeps, 'mode
     /** The user a session points at, or null when that account is gone (removed members lose their sessions). */
     async findUser(id: number): Promise<User | null> {
       const user = await models.User.findByPk(id);
-      return user ? toUser(user) : null;
+      return user && !user.removedAt ? toUser(user) : null;
     },
   };
 }

@@ -27,13 +27,17 @@ export function createInvitationService({ sequelize, models, mailer, config, pas
     });
   }
 
-  /** One account belongs to one team, so an address that has an account anywhere cannot be invited. */
+  /**
+   * One account belongs to one team, so an address that has an account anywhere cannot be invited —
+   * except a member this team removed: accepting the new invitation brings that account back.
+   */
   async function addressTaken(admin: User, email: string): Promise<string | null> {
     const existing = await Users.findOne({ where: { email } });
     if (!existing) return null;
-    return existing.teamId === admin.teamId
-      ? `${email} is already a member of this team.`
-      : `${email} already has a Cablewright account in another team; an account belongs to one team.`;
+    if (existing.teamId !== admin.teamId) {
+      return `${email} already has a Cablewright account in another team; an account belongs to one team.`;
+    }
+    return existing.removedAt ? null : `${email} is already a member of this team.`;
   }
 
   return {
@@ -92,14 +96,16 @@ export function createInvitationService({ sequelize, models, mailer, config, pas
       return sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction): Promise<Result<User>> => {
         const row = await findUsable(token, transaction);
         if (!row) return fail('not-found', INVITATION_GONE);
-        if (await Users.findOne({ where: { email: row.email }, transaction })) {
+        const existing = await Users.findOne({ where: { email: row.email }, transaction });
+        const returning = existing?.removedAt && existing.teamId === row.teamId ? existing : null;
+        if (existing && !returning) {
           return fail('conflict', `${row.email} already has a Cablewright account. Sign in instead.`);
         }
         await row.update({ acceptedAt: new Date() }, { transaction });
-        const user = await Users.create(
-          { teamId: row.teamId, email: row.email, name: body.name, role: row.role, passwordHash },
-          { transaction },
-        );
+        // A removed member coming back keeps their id, so their earlier versions and reviews are theirs again.
+        const user = returning
+          ? await returning.update({ name: body.name, role: row.role, passwordHash, removedAt: null }, { transaction })
+          : await Users.create({ teamId: row.teamId, email: row.email, name: body.name, role: row.role, passwordHash }, { transaction });
         return ok(toUser(user));
       });
     },

@@ -8,19 +8,19 @@ import { fail, ok, type Result } from './result';
 
 const NO_SUCH_MEMBER = 'There is no such member in your team.';
 
-export function createTeamService({ models }: Pick<ServiceDeps, 'models'>) {
+export function createTeamService({ sequelize, models }: Pick<ServiceDeps, 'sequelize' | 'models'>) {
   const { Team, User: Users, Invitation, Session } = models;
 
   /** A member of the viewer's team; members of other teams are "not found" like ids that do not exist (api.md). */
   async function findMember(viewer: User, memberId: number) {
-    return Users.findOne({ where: { id: memberId, teamId: viewer.teamId } });
+    return Users.findOne({ where: { id: memberId, teamId: viewer.teamId, removedAt: null } });
   }
 
   return {
     async getTeam(viewer: User): Promise<Result<TeamResponse>> {
       const team = await Team.findByPk(viewer.teamId);
       if (!team) return fail('not-found', 'Your team no longer exists.');
-      const members = await Users.findAll({ where: { teamId: team.id }, order: [['name', 'ASC'], ['id', 'ASC']] });
+      const members = await Users.findAll({ where: { teamId: team.id, removedAt: null }, order: [['name', 'ASC'], ['id', 'ASC']] });
       const response: TeamResponse = { team: { id: team.id, name: team.name }, members: members.map(toMember) };
       if (can(viewer.role, 'manageTeam')) {
         const pending = await Invitation.findAll({
@@ -45,15 +45,20 @@ export function createTeamService({ models }: Pick<ServiceDeps, 'models'>) {
       return ok(toMember(member));
     },
 
-    /** Removing a member also ends every session of theirs at once. */
+    /**
+     * Removal is soft: the row stays so the versions and reviews they made keep naming them, but they
+     * leave the members list, cannot sign in, and every session of theirs ends at once.
+     */
     async removeMember(viewer: User, memberId: number): Promise<Result<null>> {
       const member = await findMember(viewer, memberId);
       if (!member) return fail('not-found', NO_SUCH_MEMBER);
       if (member.id === viewer.id) {
         return fail('conflict', 'You cannot remove yourself from the team. Ask another admin to do it.');
       }
-      await Session.destroy({ where: { userId: member.id } });
-      await member.destroy();
+      await sequelize.transaction(async (transaction) => {
+        await Session.destroy({ where: { userId: member.id }, transaction });
+        await member.update({ removedAt: new Date() }, { transaction });
+      });
       return ok(null);
     },
   };
