@@ -2,6 +2,7 @@ import type { Response } from 'express';
 import type { FailureKind, Result } from '@/server/services/result';
 
 const STATUS: Record<FailureKind, number> = {
+  invalid: 400,
   'not-found': 404,
   conflict: 409,
   forbidden: 403,
@@ -13,7 +14,7 @@ const STATUS: Record<FailureKind, number> = {
 /** Send a service result: `status` with `shape(value)` on success (no body for 204), the mapped error otherwise. */
 export function reply<T>(res: Response, result: Result<T>, status: number, shape?: (value: T) => unknown): void {
   if (!result.ok) {
-    res.status(STATUS[result.kind]).json({ error: result.message });
+    res.status(STATUS[result.kind]).json({ error: result.message, ...result.details, ...(result.issues ? { issues: result.issues } : {}) });
     return;
   }
   if (status === 204 || !shape) {

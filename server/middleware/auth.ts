@@ -51,6 +51,10 @@ export const requireRole = (...roles: Role[]): RequestHandler => guard((role) =>
 /** 401 when signed out, 403 unless the role has `capability` in the shared role table (shared/roles.ts). */
 export const requireCapability = (capability: Capability): RequestHandler => guard((role) => can(role, capability));
 
+/** 401 when signed out, 403 unless the role has at least one of `capabilities` (the service checks the exact one). */
+export const requireAnyCapability = (...capabilities: Capability[]): RequestHandler =>
+  guard((role) => capabilities.some((capability) => can(role, capability)));
+
 /** The signed-in user in a handler behind one of the guards above. */
 export function currentUser(req: Request): User {
   if (!req.user) throw new Error('currentUser() used on a route without requireUser');

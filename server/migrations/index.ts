@@ -2,6 +2,8 @@ import type { MigrationModule } from './types';
 import * as teamsAndUsers from './0001-teams-and-users';
 import * as invitations from './0002-invitations';
 import * as sessions from './0003-sessions';
+import * as memberSoftRemoval from './0004-member-soft-removal';
+import * as designsAndVersions from './0005-designs-and-versions';
 
 /**
  * Every migration, in order. To add one: create `NNNN-what-it-does.ts` exporting `up` and `down`,
@@ -11,4 +13,6 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, module: Migration
   ['0001-teams-and-users', teamsAndUsers],
   ['0002-invitations', invitations],
   ['0003-sessions', sessions],
+  ['0004-member-soft-removal', memberSoftRemoval],
+  ['0005-designs-and-versions', designsAndVersions],
 ];

@@ -1,16 +1,22 @@
 import type { ModelStatic, Sequelize } from 'sequelize';
+import { defineDesign, type DesignRow } from './design';
+import { defineDesignVersion, type DesignVersionRow } from './design-version';
 import { defineInvitation, type InvitationRow } from './invitation';
 import { defineSession, type SessionRow } from './session';
 import { defineTeam, type TeamRow } from './team';
+import { defineReviewEvent, type ReviewEventRow } from './review-event';
 import { defineUser, type UserRow } from './user';
 
-export type { InvitationRow, SessionRow, TeamRow, UserRow };
+export type { DesignRow, DesignVersionRow, InvitationRow, ReviewEventRow, SessionRow, TeamRow, UserRow };
 
 export type Models = {
   Team: ModelStatic<TeamRow>;
   User: ModelStatic<UserRow>;
   Invitation: ModelStatic<InvitationRow>;
   Session: ModelStatic<SessionRow>;
+  Design: ModelStatic<DesignRow>;
+  DesignVersion: ModelStatic<DesignVersionRow>;
+  ReviewEvent: ModelStatic<ReviewEventRow>;
 };
 
 const cache = new WeakMap<Sequelize, Models>();
@@ -27,6 +33,9 @@ export function getModels(sequelize: Sequelize): Models {
     User: defineUser(sequelize),
     Invitation: defineInvitation(sequelize),
     Session: defineSession(sequelize),
+    Design: defineDesign(sequelize),
+    DesignVersion: defineDesignVersion(sequelize),
+    ReviewEvent: defineReviewEvent(sequelize),
   };
   models.Team.hasMany(models.User, { foreignKey: 'teamId', as: 'members' });
   models.User.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });

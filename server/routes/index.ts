@@ -3,9 +3,11 @@ import type { Mailbox } from '@/server/mail/mailbox';
 import { apiNotFound } from '@/server/middleware/errors';
 import type { Services } from '@/server/services';
 import { authRoutes } from './auth';
+import { designRoutes } from './designs';
 import { devMailRoutes } from './dev-mail';
 import { invitationRoutes } from './invitations';
 import { teamRoutes } from './team';
+import { versionRoutes } from './versions';
 
 /**
  * Everything under /api. Each route names its own guard (requireUser / requireCapability) next to its
@@ -16,6 +18,7 @@ export function apiRoutes(services: Services, mailbox: Mailbox | null): Router {
   api.use('/auth', authRoutes(services));
   api.use('/team', teamRoutes(services));
   api.use('/invitations', invitationRoutes(services));
+  api.use('/designs', designRoutes(services), versionRoutes(services));
   api.use('/dev/mail', devMailRoutes(mailbox));
   api.use(apiNotFound);
   return api;

@@ -1,6 +1,7 @@
 import { Transaction, type Sequelize } from 'sequelize';
 import { getModels } from '@/server/models';
 import type { Passwords } from '@/server/services/passwords';
+import { seedDesigns } from './designs';
 import { DEMO_ACCOUNTS, seedTeamsAndUsers, type DemoAccount } from './users';
 
 export { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_TEAMS, type DemoAccount } from './users';
@@ -16,9 +17,8 @@ export async function seedDemo(sequelize: Sequelize, passwords: Passwords): Prom
   const models = getModels(sequelize);
   const seeded = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     if ((await models.User.count({ transaction })) > 0) return false;
-    await seedTeamsAndUsers(models, passwords, transaction);
-    // Designs and versions: the designs issue adds seed/designs.ts and calls it here with the people
-    // seeded above (`const people = await seedTeamsAndUsers(...)`; `await seedDesigns(models, people, transaction)`).
+    const people = await seedTeamsAndUsers(models, passwords, transaction);
+    await seedDesigns(sequelize, models, people, transaction);
     return true;
   });
   return { seeded, accounts: await presentAccounts(sequelize) };
@@ -27,6 +27,6 @@ export async function seedDemo(sequelize: Sequelize, passwords: Passwords): Prom
 /** The demo accounts that exist in this database (all of them unless someone removed one). */
 async function presentAccounts(sequelize: Sequelize): Promise<DemoAccount[]> {
   const { User } = getModels(sequelize);
-  const present = new Set((await User.findAll({ attributes: ['email'] })).map((u) => u.email));
+  const present = new Set((await User.findAll({ attributes: ['email'], where: { removedAt: null } })).map((u) => u.email));
   return DEMO_ACCOUNTS.filter((a) => present.has(a.email));
 }

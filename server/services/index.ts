@@ -1,14 +1,16 @@
 import { createAuthService } from './auth';
 import type { ServiceDeps } from './deps';
+import { createDesignServices } from './designs';
 import { createInvitationService } from './invitations';
 import { createTeamService } from './team';
 
-/** All services of one app instance. Later areas (designs, versions, reviews) add theirs here. */
+/** All services of one app instance. */
 export function createServices(deps: ServiceDeps) {
   return {
     auth: createAuthService(deps),
     team: createTeamService(deps),
     invitations: createInvitationService(deps),
+    ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date() }),
   };
 }
 

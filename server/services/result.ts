@@ -1,8 +1,26 @@
-/** What can go wrong in a service, independent of HTTP; routes map each kind to a status (server/http/reply.ts). */
-export type FailureKind = 'not-found' | 'conflict' | 'forbidden' | 'unauthorized' | 'unavailable';
+import type { Issue } from '@/shared/api/common';
 
-export type Failure = { ok: false; kind: FailureKind; message: string };
+/** What can go wrong in a service, independent of HTTP; routes map each kind to a status (server/http/reply.ts). */
+export type FailureKind = 'invalid' | 'not-found' | 'conflict' | 'forbidden' | 'unauthorized' | 'unavailable';
+
+/**
+ * `issues` point at the request's fields (for `invalid`); `details` are extra fields of the error body,
+ * such as a save conflict's `latestVersion` (api.md).
+ */
+export type Failure = { ok: false; kind: FailureKind; message: string; issues?: Issue[]; details?: Record<string, unknown> };
 export type Result<T> = { ok: true; value: T } | Failure;
 
 export const ok = <T>(value: T): Result<T> => ({ ok: true, value });
-export const fail = (kind: FailureKind, message: string): Failure => ({ ok: false, kind, message });
+export const fail = (kind: FailureKind, message: string, extra: Pick<Failure, 'issues' | 'details'> = {}): Failure => ({
+  ok: false,
+  kind,
+  message,
+  ...extra,
+});
+/** A 400 listing every problem, with its field path, in the same shape as the validate() middleware's. */
+export const invalid = (issues: Issue[]): Failure =>
+  fail('invalid', issues.length === 1 ? describeIssue(issues[0]) : `The request has ${issues.length} problems; see issues.`, { issues });
+
+function describeIssue(issue: Issue): string {
+  return issue.path ? `${issue.path}: ${issue.message}` : issue.message;
+}

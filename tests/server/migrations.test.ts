@@ -12,14 +12,15 @@ beforeEach(async () => {
 });
 afterEach(() => sequelize.close());
 
+const ALL_TABLES = ['SequelizeMeta', 'design_versions', 'designs', 'invitations', 'review_events', 'sessions', 'teams', 'users'];
 const tables = async () => (await sequelize.getQueryInterface().showAllTables()).sort();
 
 describe('database migrations', () => {
   it('create every table on an empty database, and a second run applies nothing', async () => {
     expect(await migrate(sequelize)).toEqual(MIGRATIONS.map(([name]) => name));
-    expect(await tables()).toEqual(['SequelizeMeta', 'invitations', 'sessions', 'teams', 'users']);
+    expect(await tables()).toEqual(ALL_TABLES);
     expect(await migrate(sequelize)).toEqual([]);
-    expect(await tables()).toEqual(['SequelizeMeta', 'invitations', 'sessions', 'teams', 'users']);
+    expect(await tables()).toEqual(ALL_TABLES);
   });
 
   it('go all the way down and up again', async () => {
