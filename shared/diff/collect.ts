@@ -15,22 +15,18 @@ export type Collected = {
   devices: Map<string, Device>;
   groups: Map<string, GroupItem>;
   ports: Map<string, PortItem>;
-  /** Ports that carry an address, by port id. */
-  addressed: Map<string, PortItem>;
   cables: Map<string, Cable>;
   networks: Map<string, Network>;
 };
 
 function addPorts(into: Collected, ports: Port[], device: Device, group?: Controller | Adapter) {
   for (const port of ports) {
-    const item: PortItem = { port, device, group };
-    into.ports.set(port.id, item);
-    if (port.address) into.addressed.set(port.id, item);
+    into.ports.set(port.id, { port, device, group });
   }
 }
 
 export function collect(doc: Topology): Collected {
-  const into: Collected = { devices: new Map(), groups: new Map(), ports: new Map(), addressed: new Map(), cables: new Map(), networks: new Map() };
+  const into: Collected = { devices: new Map(), groups: new Map(), ports: new Map(), cables: new Map(), networks: new Map() };
   for (const device of doc.devices) {
     into.devices.set(device.id, device);
     if (device.kind === 'switch') {

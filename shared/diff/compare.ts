@@ -23,6 +23,8 @@ export type SectionSpec<T, S, E extends DiffEntry> = {
   describe: (id: string, item: T, side: S) => Omit<E, 'changes'>;
   /** Puts the later item in the earlier one's terms before comparing (a cable turned end for end). */
   align?: (before: T, after: T) => T;
+  /** Whether an item of the map counts as there at all (a port without an address has no address entry). */
+  present?: (item: T) => boolean;
 };
 
 export type Version<T, S> = { items: Map<string, T>; side: S };
@@ -58,6 +60,13 @@ export function byId(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
+const sortById = <E extends DiffEntry>(entries: E[]) => entries.sort((x, y) => byId(x.id, y.id));
+
+/**
+ * Walks both maps in insertion order and sorts only the entries found, not every id: between two
+ * versions of a 20,000-host design most things are unchanged, and sorting 160,000 port ids would
+ * cost more than comparing them.
+ */
 export function compareSection<T, S, E extends DiffEntry>(
   spec: SectionSpec<T, S, E>,
   before: Version<T, S>,
@@ -65,20 +74,24 @@ export function compareSection<T, S, E extends DiffEntry>(
 ): DiffSection<E> {
   const section: DiffSection<E> = { added: [], removed: [], changed: [] };
   const entry = (id: string, item: T, side: S, changes: FieldChange[]) => ({ ...spec.describe(id, item, side), changes }) as E;
-  for (const id of [...before.items.keys()].sort(byId)) {
-    const b = before.items.get(id) as T;
+  const there = (item: T | undefined): item is T => item !== undefined && (!spec.present || spec.present(item));
+  // forEach rather than `for (const [id, item] of map)`: the browser build's Babel turns that
+  // destructuring into a helper call per item, which doubles the time on big designs.
+  before.items.forEach((b, id) => {
+    if (!there(b)) return;
     const a = after.items.get(id);
-    if (a === undefined) {
+    if (!there(a)) {
       section.removed.push(entry(id, b, before.side, presentFields(spec.fields, b, before.side, 'before')));
-      continue;
+    } else if (a !== b) {
+      const changes = changedFields(spec.fields, before, after, b, spec.align ? spec.align(b, a) : a);
+      if (changes.length > 0) section.changed.push(entry(id, a, after.side, changes));
     }
-    const changes = changedFields(spec.fields, before, after, b, spec.align ? spec.align(b, a) : a);
-    if (changes.length > 0) section.changed.push(entry(id, a, after.side, changes));
-  }
-  for (const id of [...after.items.keys()].sort(byId)) {
-    if (before.items.has(id)) continue;
-    const a = after.items.get(id) as T;
-    section.added.push(entry(id, a, after.side, presentFields(spec.fields, a, after.side, 'after')));
-  }
+  });
+  after.items.forEach((a, id) => {
+    if (there(a) && !there(before.items.get(id))) section.added.push(entry(id, a, after.side, presentFields(spec.fields, a, after.side, 'after')));
+  });
+  sortById(section.added);
+  sortById(section.removed);
+  sortById(section.changed);
   return section;
 }

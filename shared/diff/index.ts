@@ -46,7 +46,7 @@ export function diffTopologies(before: Topology, after: Topology): TopologyDiff 
     ports: compareSection(portSection, ...versions((s) => s.ports)),
     cables: compareSection(cableSection, ...versions((s) => s.cables)),
     networks: compareSection(networkSection, ...versions((s) => s.networks)),
-    addresses: compareSection(addressSection, ...versions((s) => s.addressed)),
+    addresses: compareSection(addressSection, ...versions((s) => s.ports)),
   };
   const document = documentChanges(before, after);
   const counts = countAll(sections, document.length);

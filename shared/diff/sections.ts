@@ -91,6 +91,8 @@ function addressValue(address: Address | undefined): DiffValue {
 export const addressSection: SectionSpec<PortItem, Collected, AddressDiffEntry> = {
   fields: [{ field: 'address', key: (r) => addressValue(r.port.address), equal: sameIp }],
   describe: (id, r) => ({ id, name: portLabel(r), device: displayName(r.device) }),
+  // Read from the ports map: a port without an address has no address entry.
+  present: (r) => r.port.address !== undefined,
 };
 
 /** A cable turned end for end is the same cable: line the later ends up with the earlier ones. */
