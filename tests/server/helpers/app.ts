@@ -9,6 +9,7 @@ import { migrate } from '@/server/migrate';
 import { getModels, type Models } from '@/server/models';
 import { DEMO_PASSWORD, seedDemo } from '@/server/seed';
 import { createPasswords } from '@/server/services/passwords';
+import type { Role } from '@/shared/roles';
 
 /** The environment of every test app: in-memory database, cheap hashes, the real fake mail sink. */
 export const TEST_ENV: Record<string, string> = {
@@ -44,10 +45,17 @@ export type TestApp = {
   close: () => Promise<void>;
 };
 
-/** A migrated in-memory app; `seed` (default true) adds the demo teams and people. */
-export async function makeTestApp({ env = {}, seed = true }: { env?: Record<string, string>; seed?: boolean } = {}): Promise<TestApp> {
+/**
+ * A migrated app; `seed` (default true) adds the demo teams, people and designs. In memory unless
+ * `databasePath` names a file (for what only a file database shows: WAL, several connections).
+ */
+export async function makeTestApp({
+  env = {},
+  seed = true,
+  databasePath = ':memory:',
+}: { env?: Record<string, string>; seed?: boolean; databasePath?: string } = {}): Promise<TestApp> {
   const config = loadConfig({ ...TEST_ENV, ...env });
-  const sequelize = await openDatabase(':memory:');
+  const sequelize = await openDatabase(databasePath);
   await migrate(sequelize);
   if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost));
   const mailer = await createMailer(config);
@@ -67,9 +75,25 @@ export async function makeTestApp({ env = {}, seed = true }: { env?: Record<stri
 
 /** A cookie-keeping client signed in as `who` (fails the test if sign-in does not answer 200). */
 export async function signInAs(app: Express, who: DemoWho) {
+  return signInWith(app, DEMO[who]);
+}
+
+/** The same for any account with the demo password, e.g. one made by addPerson(). */
+export async function signInWith(app: Express, email: string) {
   const agent = request.agent(app);
-  await agent.post('/api/auth/sign-in').send({ email: DEMO[who], password: DEMO_PASSWORD }).expect(200);
+  await agent.post('/api/auth/sign-in').send({ email, password: DEMO_PASSWORD }).expect(200);
   return agent;
+}
+
+export type Agent = Awaited<ReturnType<typeof signInWith>>;
+
+/** Add an account with the demo password to a seeded team (the demo has no Quayside admin or reviewer). */
+export async function addPerson(t: TestApp, person: { team: string; name: string; email: string; role: Role }): Promise<number> {
+  const team = await t.models.Team.findOne({ where: { name: person.team } });
+  if (!team) throw new Error(`no team ${person.team}`);
+  const passwordHash = await createPasswords(t.config.bcryptCost).hash(DEMO_PASSWORD);
+  const row = await t.models.User.create({ teamId: team.id, name: person.name, email: person.email, role: person.role, passwordHash });
+  return row.id;
 }
 
 /** The session cookie (`name=value`) from a response's Set-Cookie, or undefined. */
