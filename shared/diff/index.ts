@@ -31,7 +31,7 @@ export * from '@/shared/diff/types';
  *
  * Things are matched by id, so reordering devices or ports is no change. Canvas positions are not
  * part of the design: they never make the diff non-empty and are only counted in `layoutMoved`.
- * Pure and deterministic; linear in the size of the documents apart from sorting ids.
+ * Pure and deterministic; linear in the size of the documents (only the entries found are sorted).
  */
 export function diffTopologies(before: Topology, after: Topology): TopologyDiff {
   const b = collect(before);
