@@ -15,18 +15,33 @@ export function familyBits(family: Family): number {
   return BITS[family];
 }
 
+const DOTTED_QUAD = /^(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/;
+
 /**
  * ipaddr.js also accepts "1.2.3", hex and octal IPv4 forms; a storage port address is always a
- * dotted quad, so IPv4 goes through the four-part-decimal check. A zone index (`fe80::1%eth0`)
- * names an interface of one machine and has no place in a shared design.
+ * dotted quad without leading zeros (which some tools read as octal), so IPv4 is matched exactly
+ * here and IPv6 goes to ipaddr.js. A zone index (`fe80::1%eth0`) names an interface of one
+ * machine and has no place in a shared design. The analysis parses every address of a design, so
+ * this avoids ipaddr.js's exception-driven detection of the family.
  */
 export function parseIp(text: string): Ip | null {
   if (typeof text !== 'string' || text.length > 64 || text.includes('%')) return null;
-  if (ipaddr.IPv4.isValidFourPartDecimal(text)) {
-    return { family: 'ipv4', value: bytesToBigint(ipaddr.IPv4.parse(text).toByteArray()) };
+  const quad = DOTTED_QUAD.exec(text);
+  if (quad) {
+    const value = ((Number(quad[1]) * 256 + Number(quad[2])) * 256 + Number(quad[3])) * 256 + Number(quad[4]);
+    return { family: 'ipv4', value: BigInt(value) };
   }
-  if (!text.includes(':') || !ipaddr.IPv6.isValid(text)) return null;
-  return { family: 'ipv6', value: bytesToBigint(ipaddr.IPv6.parse(text).toByteArray()) };
+  if (!text.includes(':')) return null;
+  let parts: number[];
+  try {
+    // parse() throws on exactly what isValid() rejects; one call instead of two.
+    parts = ipaddr.IPv6.parse(text).parts;
+  } catch {
+    return null;
+  }
+  let value = BigInt(0);
+  for (const part of parts) value = (value << BigInt(16)) | BigInt(part);
+  return { family: 'ipv6', value };
 }
 
 export function isValidIp(text: string): boolean {
@@ -40,16 +55,15 @@ export function formatIp(ip: Ip): string {
   return ip.family === 'ipv4' ? parsed.toString() : (parsed as ipaddr.IPv6).toRFC5952String();
 }
 
+/** A key equal for equal addresses, cheaper than formatting them. */
+export function ipKey(ip: Ip): string {
+  return `${ip.family}:${ip.value.toString(16)}`;
+}
+
 /** The same address in canonical text, or null when it is not an address. */
 export function normalizeIp(text: string): string | null {
   const ip = parseIp(text);
   return ip ? formatIp(ip) : null;
-}
-
-function bytesToBigint(bytes: number[]): bigint {
-  let value = BigInt(0);
-  for (const byte of bytes) value = (value << BigInt(8)) | BigInt(byte);
-  return value;
 }
 
 function bigintToBytes(value: bigint, length: number): number[] {

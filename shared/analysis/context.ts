@@ -1,6 +1,7 @@
 import { displayName, indexTopology, type PortRef, type TopologyIndex } from '@/shared/topology/index';
 import type { Cable, Topology } from '@/shared/topology/schema';
 import type { UnitKind } from '@/shared/analysis/types';
+import { parseIp, type Ip } from '@/shared/address/ip';
 
 /**
  * What every part of the analysis needs to know about one document: the lookups, which units have
@@ -12,7 +13,11 @@ export type AnalysisContext = {
   failed: ReadonlySet<string>;
   /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
   hasNetworks: boolean;
+  /** dataCable() of every cable, in document order; filled on first use (see dataCables). */
+  cache: { dataCables?: (DataCableEnds | null)[]; ips?: Map<string, Ip | null> };
 };
+
+export type DataCableEnds = { cable: Cable; a: PortRef; b: PortRef; roleA: EndRole; roleB: EndRole };
 
 /**
  * How a cable end takes part in data paths: a controller or host data port ends a path, a port of a
@@ -22,7 +27,7 @@ export type AnalysisContext = {
 export type EndRole = 'controller' | 'host' | 'switch' | 'none';
 
 export function createContext(doc: Topology, failed: readonly string[] = []): AnalysisContext {
-  return { doc, index: indexTopology(doc), failed: new Set(failed), hasNetworks: doc.networks.length > 0 };
+  return { doc, index: indexTopology(doc), failed: new Set(failed), hasNetworks: doc.networks.length > 0, cache: {} };
 }
 
 export function isForwardingSwitch(ctx: AnalysisContext, ref: PortRef): boolean {
@@ -40,10 +45,7 @@ export function endRole(ctx: AnalysisContext, ref: PortRef | undefined): EndRole
 }
 
 /** A cable that can carry a data path, with its ends classified; null when it cannot. */
-export function dataCable(
-  ctx: AnalysisContext,
-  cable: Cable,
-): { a: PortRef; b: PortRef; roleA: EndRole; roleB: EndRole } | null {
+export function dataCable(ctx: AnalysisContext, cable: Cable): DataCableEnds | null {
   if (ctx.failed.has(cable.id)) return null;
   const a = ctx.index.ports.get(cable.a);
   const b = ctx.index.ports.get(cable.b);
@@ -53,7 +55,21 @@ export function dataCable(
   // Hosts and controllers end paths; two path ends joined directly only count host-to-controller.
   if (roleA !== 'switch' && roleB !== 'switch' && roleA === roleB) return null;
   if (roleA === 'switch' && roleB === 'switch' && a.device.id === b.device.id) return null;
-  return { a, b, roleA, roleB };
+  return { cable, a, b, roleA, roleB };
+}
+
+/** An address parsed once per analysis, however many rules read it. */
+export function ipOf(ctx: AnalysisContext, text: string): Ip | null {
+  const cache = (ctx.cache.ips ??= new Map());
+  let ip = cache.get(text);
+  if (ip === undefined) cache.set(text, (ip = parseIp(text)));
+  return ip;
+}
+
+/** Every cable that can carry a data path, classified once per analysis and shared by its parts. */
+export function dataCables(ctx: AnalysisContext): DataCableEnds[] {
+  if (!ctx.cache.dataCables) ctx.cache.dataCables = ctx.doc.cables.map((cable) => dataCable(ctx, cable));
+  return ctx.cache.dataCables.filter((ends): ends is DataCableEnds => ends !== null);
 }
 
 /** Whether a host port and a controller port may form a session by their networks. */

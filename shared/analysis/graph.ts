@@ -1,12 +1,12 @@
 import { Graph } from '@dagrejs/graphlib';
-import { dataCable, type AnalysisContext } from '@/shared/analysis/context';
+import { dataCables, type AnalysisContext } from '@/shared/analysis/context';
 
 /**
  * The data-path graph of one document, as a directed graphlib graph whose node names are the
  * document's own ids (unique across the document, so they cannot collide):
  *
- *   array ─▶ controller ─▶ cable ─▶ switch ─▶ cable ─▶ switch … ─▶ cable ─▶ card ─▶ host
- *                               └────────────── (direct attach) ──────────▶ card
+ *   array ─▶ controller ─▶ cable ─▶ switch ⇄ cable ⇄ switch … ─▶ cable ─▶ card ─▶ host
+ *                     └──────────── (direct attach) ─────────────▶ cable ─▶ card ─▶ host
  *
  * - Every failure unit (controller, cable, switch, card) is a node of its own, so "this unit cut
  *   that host off" becomes "this node dominates that host" (see dominators.ts).
@@ -18,6 +18,12 @@ import { dataCable, type AnalysisContext } from '@/shared/analysis/context';
  * - An edge that leaves a controller port or enters a host port carries that port's `networkId`
  *   (or none); a walk for one network follows only edges of that network or of none.
  * - Failed units (options.failed) are left out, with everything inside them.
+ *
+ * The analysis builds only the core (`withHosts: false`): arrays, controllers, switches and the
+ * cables between them. The host side — cable, card, host, all sink-only — is evaluated from the
+ * host attachments instead (attachments.ts), which keeps the graph at the size of the fabric rather
+ * than of the host count. `withHosts: true` gives the whole graph, for display and for the tests
+ * that check both forms agree.
  */
 export type NodeKind = 'array' | 'controller' | 'cable' | 'switch' | 'adapter' | 'host';
 
@@ -44,12 +50,13 @@ function addArrays(ctx: AnalysisContext, graph: DataPathGraph): void {
   }
 }
 
-export function buildDataPathGraph(ctx: AnalysisContext): DataPathGraph {
+export function buildDataPathGraph(ctx: AnalysisContext, options: { withHosts?: boolean } = {}): DataPathGraph {
   const graph: DataPathGraph = new Graph({ directed: true });
   addArrays(ctx, graph);
-  for (const cable of ctx.doc.cables) {
-    const ends = dataCable(ctx, cable);
-    if (!ends) continue;
+  for (const ends of dataCables(ctx)) {
+    const cable = ends.cable;
+    const toHost = ends.roleA === 'host' || ends.roleB === 'host';
+    if (toHost && !options.withHosts) continue;
     ensureNode(graph, cable.id, 'cable');
     for (const [from, role, otherRole] of [
       [ends.a, ends.roleA, ends.roleB],

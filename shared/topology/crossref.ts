@@ -1,6 +1,6 @@
 import type { Issue } from '@/shared/api/common';
 import type { Topology } from '@/shared/topology/schema';
-import { iteratePorts } from '@/shared/topology/index';
+import { iteratePorts, portPath } from '@/shared/topology/index';
 
 /**
  * The checks zod cannot make one value at a time: ids unique across the whole document, cable ends
@@ -32,7 +32,7 @@ function collectIds(doc: Topology, issues: Issue[]): Map<string, Owner> {
       device.adapters.forEach((a, i) => claim(a.id, 'card', `devices.${d}.adapters.${i}`));
     }
   });
-  for (const ref of iteratePorts(doc)) claim(ref.port.id, 'port', ref.path);
+  for (const ref of iteratePorts(doc)) claim(ref.port.id, 'port', portPath(ref));
   doc.cables.forEach((cable, i) => claim(cable.id, 'cable', `cables.${i}`));
   doc.networks.forEach((network, i) => claim(network.id, 'network', `networks.${i}`));
   return owners;
@@ -59,7 +59,8 @@ function checkCables(doc: Topology, owners: Map<string, Owner>, issues: Issue[])
 
 function checkPorts(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
   for (const ref of iteratePorts(doc)) {
-    const { port, device, path } = ref;
+    const { port, device } = ref;
+    const path = portPath(ref);
     if (device.kind === 'switch') {
       if (port.networkId !== undefined) {
         issues.push({

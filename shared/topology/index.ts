@@ -22,9 +22,19 @@ export type PortRef = {
   controller?: Controller;
   /** Set for host ports: the card (or onboard group) that holds the port. */
   adapter?: Adapter;
-  /** Dotted path of the port inside the document, e.g. `devices.3.adapters.0.ports.1`. */
-  path: string;
+  /** Where the port sits: device index, controller or card index (-1 on a switch), port index. */
+  deviceIndex: number;
+  groupIndex: number;
+  portIndex: number;
 };
+
+/** Dotted path of the port inside the document, e.g. `devices.3.adapters.0.ports.1`. */
+export function portPath(ref: PortRef): string {
+  const { deviceIndex: d, groupIndex: g, portIndex: p } = ref;
+  if (ref.device.kind === 'array') return `devices.${d}.controllers.${g}.ports.${p}`;
+  if (ref.device.kind === 'host') return `devices.${d}.adapters.${g}.ports.${p}`;
+  return `devices.${d}.ports.${p}`;
+}
 
 export type TopologyIndex = {
   devices: Map<string, Device>;
@@ -45,21 +55,19 @@ export function* iteratePorts(doc: Topology): Generator<PortRef> {
       for (let c = 0; c < device.controllers.length; c += 1) {
         const controller = device.controllers[c];
         for (let p = 0; p < controller.ports.length; p += 1) {
-          const path = `devices.${d}.controllers.${c}.ports.${p}`;
-          yield { port: controller.ports[p], device, controller, path };
+          yield { port: controller.ports[p], device, controller, deviceIndex: d, groupIndex: c, portIndex: p };
         }
       }
     } else if (device.kind === 'host') {
       for (let a = 0; a < device.adapters.length; a += 1) {
         const adapter = device.adapters[a];
         for (let p = 0; p < adapter.ports.length; p += 1) {
-          const path = `devices.${d}.adapters.${a}.ports.${p}`;
-          yield { port: adapter.ports[p], device, adapter, path };
+          yield { port: adapter.ports[p], device, adapter, deviceIndex: d, groupIndex: a, portIndex: p };
         }
       }
     } else {
       for (let p = 0; p < device.ports.length; p += 1) {
-        yield { port: device.ports[p], device, path: `devices.${d}.ports.${p}` };
+        yield { port: device.ports[p], device, deviceIndex: d, groupIndex: -1, portIndex: p };
       }
     }
   }
@@ -83,7 +91,20 @@ export function indexTopology(doc: Topology): TopologyIndex {
       for (const adapter of device.adapters) index.adapters.set(adapter.id, { adapter, host: device });
     }
   }
-  for (const ref of iteratePorts(doc)) index.ports.set(ref.port.id, ref);
+  // Plain loops rather than iteratePorts: this runs on every analysis of every edit.
+  doc.devices.forEach((device, d) => {
+    if (device.kind === 'switch') {
+      device.ports.forEach((port, p) => index.ports.set(port.id, { port, device, deviceIndex: d, groupIndex: -1, portIndex: p }));
+    } else if (device.kind === 'array') {
+      device.controllers.forEach((controller, c) =>
+        controller.ports.forEach((port, p) => index.ports.set(port.id, { port, device, controller, deviceIndex: d, groupIndex: c, portIndex: p })),
+      );
+    } else {
+      device.adapters.forEach((adapter, a) =>
+        adapter.ports.forEach((port, p) => index.ports.set(port.id, { port, device, adapter, deviceIndex: d, groupIndex: a, portIndex: p })),
+      );
+    }
+  });
   for (const network of doc.networks) index.networks.set(network.id, network);
   for (const cable of doc.cables) {
     index.cables.set(cable.id, cable);

@@ -1,8 +1,8 @@
 import { containsIp, isReservedInBlock, parseCidr, type Cidr } from '@/shared/address/cidr';
-import { formatIp, parseIp } from '@/shared/address/ip';
-import { nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import { ipKey } from '@/shared/address/ip';
+import { ipOf, nameOf, type AnalysisContext } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
-import { displayName, iteratePorts, portLabel, type PortRef } from '@/shared/topology/index';
+import { displayName, portLabel, type PortRef } from '@/shared/topology/index';
 
 /**
  * Port addressing: every cabled host or controller port on a network of its own kind, with an
@@ -19,8 +19,10 @@ function blocks(ctx: AnalysisContext): Map<string, Cidr> {
 
 function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>): Finding[] {
   const { port } = ref;
-  const label = portLabel(ref);
   const network = port.networkId ? ctx.index.networks.get(port.networkId) : undefined;
+  // Cheap checks first: this runs for every port of every design, and most ports are fine.
+  if (!(cabled && (!network || !port.address)) && !(network && network.purpose !== port.role) && (port.address?.mode !== 'static' || !network)) return [];
+  const label = portLabel(ref);
   const out: Finding[] = [];
   if (cabled && !network) {
     out.push({ rule: 'port-unaddressed', severity: 'warning', subjects: [port.id], message: `${label} is cabled but on no network.` });
@@ -36,10 +38,12 @@ function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs
     });
   }
   if (port.address?.mode !== 'static' || !network) return out;
-  const ip = parseIp(port.address.ip);
+  const ip = ipOf(ctx, port.address.ip);
   const block = cidrs.get(network.id);
   if (!ip || !block) return out;
-  if (!containsIp(block, ip)) {
+  const inside = containsIp(block, ip);
+  if (inside && !isReservedInBlock(block, ip)) return out;
+  if (!inside) {
     out.push({
       rule: 'address-outside-network',
       severity: 'error',
@@ -62,7 +66,7 @@ function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Findin
   const out: Finding[] = [];
   for (const network of ctx.doc.networks) {
     const block = cidrs.get(network.id);
-    const gateway = network.gateway ? parseIp(network.gateway) : null;
+    const gateway = network.gateway ? ipOf(ctx, network.gateway) : null;
     if (!block || !gateway || containsIp(block, gateway)) continue;
     out.push({
       rule: 'address-outside-network',
@@ -76,19 +80,21 @@ function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Findin
 
 /** The same address on two ports, or a port on its network's gateway address. */
 function duplicateFindings(ctx: AnalysisContext): Finding[] {
-  const holders = new Map<string, string[]>();
+  const holders = new Map<string, { text: string; ids: string[] }>();
   const add = (ip: string | undefined, holder: string) => {
-    const parsed = ip ? parseIp(ip) : null;
-    if (!parsed) return;
-    const key = formatIp(parsed);
-    holders.set(key, [...(holders.get(key) ?? []), holder]);
+    const parsed = ip ? ipOf(ctx, ip) : null;
+    if (!parsed || !ip) return;
+    const key = ipKey(parsed);
+    const entry = holders.get(key);
+    if (entry) entry.ids.push(holder);
+    else holders.set(key, { text: ip, ids: [holder] });
   };
   for (const network of ctx.doc.networks) add(network.gateway, network.id);
-  for (const ref of iteratePorts(ctx.doc)) {
+  for (const ref of ctx.index.ports.values()) {
     if (ref.port.address?.mode === 'static') add(ref.port.address.ip, ref.port.id);
   }
   const out: Finding[] = [];
-  for (const [ip, ids] of holders) {
+  for (const { text: ip, ids } of holders.values()) {
     const ports = ids.filter((id) => ctx.index.ports.has(id));
     if (ids.length < 2 || ports.length === 0) continue;
     const names = ids.map((id) => {
@@ -103,7 +109,7 @@ function duplicateFindings(ctx: AnalysisContext): Finding[] {
 export function addressingFindings(ctx: AnalysisContext): Finding[] {
   const cidrs = blocks(ctx);
   const out: Finding[] = [];
-  for (const ref of iteratePorts(ctx.doc)) {
+  for (const ref of ctx.index.ports.values()) {
     if (ref.device.kind === 'switch') continue;
     out.push(...portFindings(ctx, ref, ctx.index.cablesByPort.has(ref.port.id), cidrs));
   }

@@ -13,10 +13,15 @@ function cableFindings(ctx: AnalysisContext, cable: Cable): Finding[] {
   const a = ctx.index.ports.get(cable.a);
   const b = ctx.index.ports.get(cable.b);
   if (!a || !b) return [];
+  const needs = connectorFor(cable.media);
+  const speed = linkSpeed(a.port.speedGbps, b.port.speedGbps);
+  const reach = reachOf(cable.media, speed);
+  const fine = a.port.connector === b.port.connector && a.port.connector === needs && a.port.speedGbps === b.port.speedGbps;
+  // Most cables are fine: leave before building any text.
+  if (fine && reach && cable.lengthM !== undefined && cable.lengthM <= reach.maxM) return [];
   const name = describeUnit(ctx, cable.id);
   const subjects = [cable.id, a.port.id, b.port.id];
   const out: Finding[] = [];
-  const needs = connectorFor(cable.media);
   if (a.port.connector !== b.port.connector) {
     out.push({
       rule: 'connector-mismatch',
@@ -40,8 +45,6 @@ function cableFindings(ctx: AnalysisContext, cable: Cable): Finding[] {
       message: `${name} joins a ${a.port.speedGbps} Gb/s port to a ${b.port.speedGbps} Gb/s port; the link runs at ${linkSpeed(a.port.speedGbps, b.port.speedGbps)} Gb/s at best.`,
     });
   }
-  const speed = linkSpeed(a.port.speedGbps, b.port.speedGbps);
-  const reach = reachOf(cable.media, speed);
   if (!reach) {
     const carries = speedsFor(cable.media);
     out.push({

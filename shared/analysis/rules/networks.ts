@@ -1,5 +1,5 @@
 import { parseCidr, type Cidr } from '@/shared/address/cidr';
-import { dataCable, nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import { dataCables, nameOf, type AnalysisContext } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
 import { LIMITS } from '@/shared/rules/limits';
 import type { Network } from '@/shared/topology/schema';
@@ -77,23 +77,20 @@ function joinedNetworks(ctx: AnalysisContext): Map<string, Set<string>> {
     const rb = find(b);
     if (ra !== rb) parent.set(ra, rb);
   };
-  const members: string[] = [];
-  for (const cable of ctx.doc.cables) {
-    const ends = dataCable(ctx, cable);
-    if (!ends) continue;
+  const members: [string, string][] = [];
+  for (const ends of dataCables(ctx)) {
     // A switch is one group; a host or controller port is a group of its own.
     const key = (ref: typeof ends.a, role: string) => (role === 'switch' ? `switch:${ref.device.id}` : `port:${ref.port.id}`);
     union(key(ends.a, ends.roleA), key(ends.b, ends.roleB));
-    for (const [ref, role] of [[ends.a, ends.roleA], [ends.b, ends.roleB]] as const) {
-      if (role !== 'switch' && ref.port.networkId) members.push(`${key(ref, role)}\u0000${ref.port.networkId}`);
-    }
+    if (ends.roleA !== 'switch' && ends.a.port.networkId) members.push([key(ends.a, ends.roleA), ends.a.port.networkId]);
+    if (ends.roleB !== 'switch' && ends.b.port.networkId) members.push([key(ends.b, ends.roleB), ends.b.port.networkId]);
   }
   const groups = new Map<string, Set<string>>();
-  for (const member of members) {
-    const [key, networkId] = member.split('\u0000');
+  for (const [key, networkId] of members) {
     const root = find(key);
-    if (!groups.has(root)) groups.set(root, new Set());
-    groups.get(root)!.add(networkId);
+    const set = groups.get(root);
+    if (set) set.add(networkId);
+    else groups.set(root, new Set([networkId]));
   }
   return groups;
 }

@@ -28,6 +28,7 @@ export function redundancyFindings(ctx: AnalysisContext, hosts: HostArrayResult[
   const findings: Finding[] = [];
   const reaching = new Set(hosts.map((pair) => pair.host));
   for (const pair of hosts) {
+    if (pair.redundant && pair.controllersReached.length !== 1) continue;
     const host = nameOf(ctx, pair.host);
     const array = nameOf(ctx, pair.array);
     if (!pair.redundant) {

@@ -62,11 +62,13 @@ export function separationFindings(ctx: AnalysisContext): Finding[] {
     const x = ctx.index.ports.get(cable.a);
     const y = ctx.index.ports.get(cable.b);
     if (!x || !y) continue;
+    const sx = switchOf(x);
+    const sy = switchOf(y);
+    if (sx?.role === 'shared') sharedInUse.add(sx.id);
+    if (sy?.role === 'shared') sharedInUse.add(sy.id);
+    // Host or controller port to a data switch with matching roles: the common case, nothing to say.
+    if (!sx !== !sy && (sx ?? sy)!.role !== 'management' && (sx ? y : x).port.role === 'data') continue;
     findings.push(...cableFindings(ctx, cable.id, x, y));
-    for (const ref of [x, y]) {
-      const sw = switchOf(ref);
-      if (sw?.role === 'shared') sharedInUse.add(sw.id);
-    }
   }
   for (const device of ctx.doc.devices) {
     if (!sharedInUse.has(device.id)) continue;
