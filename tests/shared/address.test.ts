@@ -52,6 +52,7 @@ describe('address math on published values', () => {
     expect(parseIp('0xc0.0.2.1')).toBeNull();
     expect(parseIp('fe80::1%eth0')).toBeNull();
     expect(parseIp('198.51.100.256')).toBeNull();
+    expect(parseIp('198.051.100.1')).toBeNull(); // a leading zero reads as octal in some tools (from memory: inet_aton)
     expect(normalizeIp('2001:DB8:0:0:0:0:0:21')).toBe('2001:db8::21'); // RFC 5952 §4 canonical text
   });
 });
@@ -95,6 +96,18 @@ describe('address math cross-checked with the ip-address package', () => {
         expect(networkAddress(cidr)).toBe(reference.startAddress().correctForm());
         expect(broadcastAddress(cidr)).toBe(reference.endAddress().correctForm());
         expect(contains(cidr, probe)).toBe(new Address4(probe).isInSubnet(reference));
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('reads compressed IPv6 text as ip-address does', () => {
+    const group = fc.oneof(fc.constant(0), fc.nat(0xffff));
+    fc.assert(
+      fc.property(fc.array(group, { minLength: 8, maxLength: 8 }), (parts) => {
+        const text = new Address6(parts.map((p) => p.toString(16)).join(':')).correctForm(); // RFC 5952 compressed
+        expect(parseIp(text)?.value).toBe(BigInt(new Address6(text).bigInt()));
+        expect(normalizeIp(text)).toBe(text);
       }),
       { numRuns: 500 },
     );
