@@ -126,31 +126,22 @@ describe('incremental snapshots', () => {
     expect(withMovedDevices(first, { 'host-1': first.devices.get('host-1')!.position })).toBe(first);
   });
 
-  it('builds 300 devices and 600 cables well under 5 ms, and a one-device move well under 1 ms', () => {
+  it('rebuilds only the moved device and its cables on a 300-device, 600-cable design', () => {
+    // Speed itself is measured by `npm run bench` (tests/bench/editor.bench.ts); here the reuse that
+    // makes a drag cheap: untouched devices and cables keep their computed objects.
     const doc = bigDesign();
     expect([doc.devices.length, doc.cables.length]).toEqual([300, 600]);
-    // The lower quartile, not the mean: on a shared 2-core machine other processes and GC pauses
-    // add noise that says nothing about this code, while a slow build shows in every run.
-    const quartile = (runs: number[]) => runs.sort((a, b) => a - b)[Math.floor(runs.length / 4)];
-    for (let i = 0; i < 10; i += 1) buildSnapshot(doc); // warm the JIT, as a long-lived canvas is
-    const full: number[] = [];
-    for (let i = 0; i < 31; i += 1) {
-      const start = performance.now();
-      buildSnapshot(doc);
-      full.push(performance.now() - start);
+    const before = buildSnapshot(doc);
+    const moved = moveDevice(doc, { id: 'switch-7', x: 5000, y: 900 });
+    const after = buildSnapshot(moved, before);
+    expect(after.devices.get('switch-7')!.rect).toMatchObject({ x: 5000, y: 900 });
+    const touching = new Set(after.cablesByDevice.get('switch-7') ?? []);
+    let reusedDevices = 0;
+    for (const [id, box] of after.devices) if (id !== 'switch-7' && box === before.devices.get(id)) reusedDevices += 1;
+    expect(reusedDevices).toBe(299);
+    for (const [id, line] of after.cables) {
+      expect([id, line === before.cables.get(id)]).toEqual([id, !touching.has(id)]);
     }
-    let snap = buildSnapshot(doc);
-    let current = doc;
-    const moves: number[] = [];
-    for (let i = 0; i < 41; i += 1) {
-      const start = performance.now();
-      current = moveDevice(current, { id: 'switch-7', x: 4200 + i * 3, y: 600 });
-      snap = buildSnapshot(current, snap);
-      moves.push(performance.now() - start);
-    }
-    expect(quartile(full)).toBeLessThan(5);
-    expect(quartile(moves)).toBeLessThan(1);
-    expect(snap.devices.get('switch-7')!.rect.x).toBe(4200 + 40 * 3);
   });
 });
 
