@@ -97,7 +97,7 @@ async function main() {
 
 if (process.argv[2] === '--child') {
   process.send!(measure(Number(process.argv[3])));
-  process.disconnect();
+  process.disconnect?.();
 } else {
   void main();
 }
