@@ -21,7 +21,16 @@ export function prepareDocument(input: unknown): Result<PreparedDocument> {
   const checked = validateTopology(input);
   if (!checked.ok) return invalid(checked.issues.map(intoBody));
   const { doc } = checked;
-  return ok({ doc, json: JSON.stringify(doc), hash: contentHash(doc), summary: summarize(analyze(doc), doc) });
+  let summary: ReportSummary;
+  try {
+    summary = summarize(analyze(doc), doc);
+  } catch (error) {
+    // A document the schema accepts but the analysis cannot finish (seen: hundreds of networks with
+    // the same subnet overflow the stack). It is not stored without a summary; the sender hears why.
+    console.error('Analysis failed on a submitted document:', (error as Error).message);
+    return invalid([{ path: 'document', message: 'The analysis could not finish on this document; it is too large or too repetitive to check. Simplify it and save again.' }]);
+  }
+  return ok({ doc, json: JSON.stringify(doc), hash: contentHash(doc), summary });
 }
 
 function intoBody(issue: Issue): Issue {
