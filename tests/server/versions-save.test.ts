@@ -201,11 +201,12 @@ describe('saving a version', () => {
     doc.networks.push(...Array.from({ length: 600 }, (_, i) => ({ id: `copy-${i}`, name: `copy ${i}`, purpose: 'data' as const, cidr: '198.51.100.0/24' })));
     const log = jest.spyOn(console, 'error').mockImplementation(() => undefined);
     const res = await ravi.post(`/api/designs/${id}/versions`).send({ baseVersion: 2, message: 'Many copies', document: doc });
+    const logged = log.mock.calls.map((call) => call[0]);
     log.mockRestore();
     expect([201, 400]).toContain(res.status);
     if (res.status === 400) {
       expect(res.body.issues).toEqual([{ path: 'document', message: expect.stringContaining('analysis could not finish') }]);
-      expect(log).toHaveBeenCalledWith('Analysis failed on a submitted document:', expect.any(String));
+      expect(logged).toContain('Analysis failed on a submitted document:');
     }
     await ravi.get(`/api/designs/${id}`).expect(200);
   });
