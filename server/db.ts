@@ -21,6 +21,7 @@ export async function openDatabase(storage: string): Promise<Sequelize> {
     pool: inMemory ? { max: 1, min: 1, idle: Number.MAX_SAFE_INTEGER } : { max: 5 },
   });
   withBusyTimeout(sequelize);
+  oneTransactionAtATime(sequelize);
   await sequelize.authenticate();
   if (!inMemory) await sequelize.query('PRAGMA journal_mode = WAL');
   return sequelize;
@@ -40,4 +41,28 @@ function withBusyTimeout(sequelize: Sequelize): void {
     }
     return connection;
   };
+}
+
+/**
+ * Run this process's managed transactions one after another. node-sqlite3 executes statements on
+ * libuv's small thread pool (4 threads by default), and a connection waiting for SQLite's write lock
+ * sleeps in its busy handler on one of those threads. With four transactions waiting, the one that
+ * holds the lock has no thread left to commit on, and everything stalls until the busy timeout
+ * turns into SQLITE_BUSY errors. Queued here, at most one transaction per process waits on the lock;
+ * other processes on the same file are still kept apart by SQLite itself (BEGIN IMMEDIATE + busy timeout).
+ * It also keeps ':memory:' (one shared connection) from nesting BEGINs. Savepoints (a transaction
+ * inside another) join their parent and are not queued; unmanaged transactions are left alone.
+ */
+function oneTransactionAtATime(sequelize: Sequelize): void {
+  const transaction = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
+  let tail: Promise<unknown> = Promise.resolve();
+  const queued = (...args: unknown[]): Promise<unknown> => {
+    const work = args.find((a) => typeof a === 'function');
+    const options = typeof args[0] === 'object' && args[0] !== null ? (args[0] as { transaction?: unknown }) : {};
+    if (!work || options.transaction) return transaction(...args);
+    const run = tail.then(() => transaction(...args));
+    tail = run.catch(() => undefined);
+    return run;
+  };
+  (sequelize as unknown as { transaction: typeof queued }).transaction = queued;
 }
