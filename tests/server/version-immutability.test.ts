@@ -1,0 +1,52 @@
+import { UniqueConstraintError } from 'sequelize';
+import { makeTestApp, signInAs, type TestApp } from './helpers/app';
+import { designId } from './helpers/designs';
+
+let t: TestApp;
+let id: number;
+beforeEach(async () => {
+  t = await makeTestApp();
+  id = await designId(t);
+});
+afterEach(() => t.close());
+
+describe('saved versions and review events never change', () => {
+  it('has no route that changes or deletes a version', async () => {
+    const maya = await signInAs(t.app, 'admin');
+    for (const method of ['put', 'patch', 'delete'] as const) {
+      const res = await maya[method](`/api/designs/${id}/versions/1`).send({ message: 'rewritten' });
+      // RFC 9110 §15.5.5: 404 — there is no such resource to act on at this method.
+      expect([method, res.status]).toEqual([method, 404]);
+    }
+    const v1 = await t.models.DesignVersion.findOne({ where: { designId: id, number: 1 } });
+    expect(v1?.message).toMatch(/^First layout/);
+  });
+
+  it('refuses UPDATE and DELETE in the database itself, for versions and review events', async () => {
+    for (const sql of [
+      "UPDATE design_versions SET message = 'rewritten'",
+      'DELETE FROM design_versions',
+      "UPDATE review_events SET comment = 'never said'",
+      'DELETE FROM review_events',
+    ]) {
+      // The trigger's RAISE(ABORT) reaches Sequelize as a constraint error carrying SQLite's message.
+      await expect(t.sequelize.query(sql)).rejects.toMatchObject({ parent: { message: expect.stringMatching(/rows are immutable/) } });
+    }
+    expect(await t.models.DesignVersion.count()).toBe(3);
+    expect(await t.models.ReviewEvent.count()).toBe(4);
+  });
+
+  it('refuses updates and deletes through the models before they reach the database', async () => {
+    const v1 = await t.models.DesignVersion.findOne({ where: { designId: id, number: 1 } });
+    await expect(v1?.update({ message: 'rewritten' })).rejects.toThrow(/never changes/);
+    await expect(t.models.DesignVersion.destroy({ where: { designId: id } })).rejects.toThrow(/never changes/);
+    await expect(t.models.ReviewEvent.update({ comment: 'x' }, { where: {} })).rejects.toThrow(/never changes/);
+  });
+
+  it('keeps (design, number) unique: a second version 2 cannot be inserted', async () => {
+    const v2 = await t.models.DesignVersion.findOne({ where: { designId: id, number: 2 } });
+    if (!v2) throw new Error('no seeded version 2');
+    const { id: _id, ...copy } = v2.get({ plain: true });
+    await expect(t.models.DesignVersion.create({ ...copy, message: 'Twin' })).rejects.toBeInstanceOf(UniqueConstraintError);
+  });
+});
