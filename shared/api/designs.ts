@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { ReportSummary } from '../analysis/summary';
 import type { Report } from '../analysis/types';
+import type { TopologyDiff } from '../diff/types';
 import type { Topology } from '../topology/schema';
 
 /**
@@ -92,10 +93,23 @@ export type DesignListItem = {
 
 export type DesignDto = Omit<DesignListItem, 'latestVersion'> & { createdAt: string; createdBy: Person | null };
 
+/** GET /api/designs — the caller's team's designs, most recently changed first. */
 export type DesignsResponse = { designs: DesignListItem[] };
+/**
+ * GET /api/designs/:id — `versions` newest first, without documents. For installers: only approved
+ * versions, `design.status` is "approved", and a design with no approved version answers 404.
+ */
 export type DesignResponse = { design: DesignDto; versions: VersionSummary[] };
 export type CreateDesignResponse = { design: DesignDto; version: VersionSummary | null };
 export type VersionResponse = { version: VersionDetail };
 export type SaveVersionResponse = { version: VersionSummary };
 export type ReportResponse = { report: Report; summary: ReportSummary };
 export type ReviewResponse = { review: VersionReview; design: DesignDto };
+/** GET …/versions/:n/diff?against=m — what changed going from version m (before) to version n (after). */
+export type DiffResponse = { diff: TopologyDiff };
+
+/**
+ * The 409 body of a save whose baseVersion is not the latest: `latestVersion` is the number to
+ * reload and build on, or null when the design has no version yet (then save with baseVersion null).
+ */
+export type SaveConflictBody = { error: string; latestVersion: number | null };
