@@ -2,6 +2,7 @@ import { Op } from 'sequelize';
 import type { User } from '@/shared/api/auth';
 import type { Member, TeamResponse } from '@/shared/api/team';
 import { can, type Role } from '@/shared/roles';
+import type { InvitationRow, UserRow } from '@/server/models';
 import type { ServiceDeps } from './deps';
 import { toMember, toPendingInvitation } from './dto';
 import { fail, ok, type Result } from './result';
@@ -28,8 +29,8 @@ export function createTeamService({ sequelize, models }: Pick<ServiceDeps, 'sequ
           include: [{ model: Users, as: 'invitedBy' }],
           order: [['createdAt', 'DESC'], ['id', 'DESC']],
         });
-        const byId = new Map(members.map((m) => [m.id, m]));
-        response.invitations = pending.map((row) => toPendingInvitation(row, row.invitedById ? (byId.get(row.invitedById) ?? null) : null));
+        // The included inviter, removed or not: an invitation still says who sent it after they left.
+        response.invitations = pending.map((row) => toPendingInvitation(row, (row as InvitationRow & { invitedBy?: UserRow | null }).invitedBy ?? null));
       }
       return ok(response);
     },

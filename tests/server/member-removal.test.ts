@@ -84,3 +84,16 @@ describe('removing a member keeps their name on their work', () => {
     expect(res.status).toBe(409);
   });
 });
+
+describe('invitations sent by a member who was removed', () => {
+  it('still name who sent them', async () => {
+    const admin = await signInAs(t.app, 'admin');
+    const theoId = await idOf(DEMO.reviewer);
+    await admin.patch(`/api/team/members/${theoId}`).send({ role: 'admin' }).expect(200);
+    const theo = await signInAs(t.app, 'reviewer');
+    await theo.post('/api/team/invitations').send({ email: 'new.person@tidewater.example', role: 'designer' }).expect(201);
+    await admin.delete(`/api/team/members/${theoId}`).expect(204);
+    const { invitations } = (await admin.get('/api/team').expect(200)).body;
+    expect(invitations).toEqual([expect.objectContaining({ email: 'new.person@tidewater.example', invitedBy: { id: theoId, name: 'Theo Brandt' } })]);
+  });
+});
