@@ -1,4 +1,4 @@
-import type { Device, PortRole } from '@/shared/topology/schema';
+import type { Connector, Device, PortRole } from '@/shared/topology/schema';
 
 /**
  * The drawn shape of one device in its own coordinates (top-left at 0,0): a header with the name,
@@ -23,11 +23,11 @@ export const MIN_DEVICE_WIDTH = 140;
 export const SWITCH_PORTS_PER_ROW = 12;
 export const GROUP_PORTS_PER_ROW = 8;
 
-export type LocalPort = { id: string; name: string; role: PortRole; groupId?: string; rect: Rect; target: Rect; anchor: Point };
+export type LocalPort = { id: string; name: string; role: PortRole; connector: Connector; groupId?: string; rect: Rect; target: Rect; anchor: Point };
 export type LocalGroup = { id: string; name: string; rect: Rect };
 export type DeviceShape = { width: number; height: number; header: Rect; groups: LocalGroup[]; ports: LocalPort[] };
 
-type PortLike = { id: string; name: string; role: PortRole };
+type PortLike = { id: string; name: string; role: PortRole; connector: Connector };
 
 function layPorts(ports: PortLike[], left: number, top: number, perRow: number, groupId: string | undefined, out: LocalPort[]): void {
   const inset = (PORT_PITCH - PORT_SIZE) / 2;
@@ -38,6 +38,7 @@ function layPorts(ports: PortLike[], left: number, top: number, perRow: number, 
       id: port.id,
       name: port.name,
       role: port.role,
+      connector: port.connector,
       groupId,
       target: { x, y, width: PORT_PITCH, height: PORT_PITCH },
       rect: { x: x + inset, y: y + inset, width: PORT_SIZE, height: PORT_SIZE },

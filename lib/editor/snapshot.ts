@@ -22,6 +22,7 @@ export type PortBox = {
   groupId?: string;
   name: string;
   role: 'data' | 'management';
+  connector: 'rj45' | 'sfp';
   /** The drawn port. */
   rect: Rect;
   /** The tappable area, at least 44 × 44 at zoom 1. */
@@ -84,6 +85,7 @@ function worldPort(box: DeviceBox, index: number): PortBox {
     groupId: p.groupId,
     name: p.name,
     role: p.role,
+    connector: p.connector,
     rect: toWorld(box, p.rect),
     target: toWorld(box, p.target),
     anchor: { x: p.anchor.x + box.position.x, y: p.anchor.y + box.position.y },
