@@ -1,19 +1,27 @@
-import { validateTopology } from '@/shared/topology/validate';
-import { makeTestApp, signInAs, type Agent, type TestApp } from './helpers/app';
+import type { Server } from 'node:http';
+import request from 'supertest';
+import { DEMO, DEMO_PASSWORD, makeTestApp, type Agent, type TestApp } from './helpers/app';
 import { designId, harborV2, type Issue } from './helpers/designs';
 import { malformedDocuments, pointsInto } from './helpers/malformed';
 
 let t: TestApp;
+let server: Server;
 let ravi: Agent;
 let id: number;
 beforeAll(async () => {
   t = await makeTestApp();
-  ravi = await signInAs(t.app, 'designer');
+  // One listening server for the thousand requests (supertest otherwise starts one per request).
+  server = t.app.listen(0);
+  ravi = request.agent(server);
+  await ravi.post('/api/auth/sign-in').send({ email: DEMO.designer, password: DEMO_PASSWORD }).expect(200);
   id = await designId(t);
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  await new Promise((resolve) => server.close(resolve));
+  await t.close();
+});
 
-const COUNT = 1200;
+const COUNT = 1000;
 
 describe('generated malformed documents', () => {
   const cases = malformedDocuments(COUNT);
@@ -31,7 +39,7 @@ describe('generated malformed documents', () => {
     const statuses = new Map<number, number>();
     const misses: string[] = [];
     const check = async (i: number) => {
-      const { kind, document } = cases[i];
+      const { kind, document, paths } = cases[i];
       // Every tenth goes to design creation, the other route that takes a document.
       const res =
         i % 10 === 0
@@ -39,13 +47,11 @@ describe('generated malformed documents', () => {
           : await ravi.post(`/api/designs/${id}/versions`).send({ baseVersion: 2, message: `Attempt ${i}`, document });
       statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
       const issues = (res.body.issues ?? []) as Issue[];
-      const expected = validateTopology(document);
-      const expectedPaths = expected.ok ? [] : expected.issues.map((x) => (x.path ? `document.${x.path}` : 'document'));
       if (
         res.status !== 400 ||
         issues.length === 0 ||
         !issues.every((x) => pointsInto(document, x.path)) ||
-        JSON.stringify(issues.map((x) => x.path)) !== JSON.stringify(expectedPaths)
+        JSON.stringify(issues.map((x) => x.path)) !== JSON.stringify(paths)
       ) {
         misses.push(`#${i} ${kind}: ${res.status} ${JSON.stringify(res.body).slice(0, 300)}`);
       }

@@ -104,7 +104,9 @@ export function createVersionService(deps: DesignDeps) {
 
     /** Save a new version on top of `baseVersion`, which must still be the latest (null when there is none). */
     async save(viewer: User, id: number, body: SaveVersionBody, within: Within = {}): Promise<Result<VersionSummary>> {
-      if (!(await loadDesignView(models, viewer, id, within.transaction))) return fail('not-found', NO_SUCH_DESIGN);
+      // Editors see every design of their team, so one indexed lookup answers "is it theirs?".
+      const own = await models.Design.findOne({ where: { id, teamId: viewer.teamId }, attributes: ['id'], transaction: within.transaction });
+      if (!own) return fail('not-found', NO_SUCH_DESIGN);
       const prepared = prepareDocument(body.document);
       if (!prepared.ok) return prepared;
       return write(viewer, id, { message: body.message, prepared: prepared.value, baseVersion: body.baseVersion }, within);

@@ -10,7 +10,8 @@ import { harborV1 } from './designs';
  */
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 type Obj = { [key: string]: Json };
-export type Malformed = { kind: string; document: unknown };
+/** `paths`: the issue paths the shared validator gives for the document, as they must appear in the body. */
+export type Malformed = { kind: string; document: unknown; paths: string[] };
 
 /** mulberry32: a small seeded generator (public domain). */
 function prng(seed: number): () => number {
@@ -114,7 +115,8 @@ export function malformedDocuments(count: number, seed = 20260107): Malformed[] 
   while (out.length < count) {
     if (out.length % 10 === 9 && junkIndex < junk.length) {
       const document = junk[junkIndex++];
-      if (!validateTopology(document).ok) out.push({ kind: 'random JSON', document });
+      const paths = issuePaths(document);
+      if (paths) out.push({ kind: 'random JSON', document, paths });
       continue;
     }
     const doc = harborV1() as unknown as Obj;
@@ -130,9 +132,16 @@ export function malformedDocuments(count: number, seed = 20260107): Malformed[] 
       }
     }
     // A mutation can happen to leave the document valid (a wrong value that is still allowed); keep only invalid ones.
-    if (names.length > 0 && !validateTopology(doc).ok) out.push({ kind: names.join(' + '), document: doc });
+    const paths = names.length > 0 ? issuePaths(doc) : null;
+    if (paths) out.push({ kind: names.join(' + '), document: doc, paths });
   }
   return out;
+}
+
+/** The validator's issue paths prefixed into the request body, or null for a valid document. */
+function issuePaths(document: unknown): string[] | null {
+  const checked = validateTopology(document);
+  return checked.ok ? null : checked.issues.map((x) => (x.path ? `document.${x.path}` : 'document'));
 }
 
 /**
