@@ -1,5 +1,5 @@
 import { parseCidr, type Cidr } from '@/shared/address/cidr';
-import { dataCables, nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import { byId, dataCables, nameOf, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
 import { LIMITS } from '@/shared/rules/limits';
 import type { Network } from '@/shared/topology/schema';
@@ -61,55 +61,80 @@ function rangeFindings(ctx: AnalysisContext): Finding[] {
   return out;
 }
 
-/** Groups of ports a data path joins: union–find over data cables and through each forwarding switch. */
-function joinedNetworks(ctx: AnalysisContext): Map<string, Set<string>> {
+/** The networks on the two sides of one group of joined ports. */
+type Sides = { host: Set<string>; controller: Set<string> };
+
+/**
+ * Which networks data paths join. Ports joined by data cables and through forwarding switches fall
+ * in one group (union–find with path halving; a switch is one member, a host or controller port
+ * another, keyed by id, since ids are unique across the document). A data path always runs from a
+ * host port to a controller port, so each group keeps its host-side and controller-side networks
+ * apart: a switch with only controllers (or only hosts) on it joins no networks yet.
+ */
+function joinedNetworks(ctx: AnalysisContext): Sides[] {
   const parent = new Map<string, string>();
   const find = (x: string): string => {
-    while ((parent.get(x) ?? x) !== x) {
-      const up = parent.get(x)!;
-      parent.set(x, parent.get(up) ?? up);
-      x = up;
+    let node = x;
+    for (let up = parent.get(node); up !== undefined && up !== node; up = parent.get(node)) {
+      const grand = parent.get(up) ?? up;
+      parent.set(node, grand);
+      node = grand;
     }
-    return x;
+    return node;
   };
-  const union = (a: string, b: string) => {
+  const cables = dataCables(ctx);
+  for (const ends of cables) {
+    const a = ends.roleA === 'switch' ? ends.a.device.id : ends.a.port.id;
+    const b = ends.roleB === 'switch' ? ends.b.device.id : ends.b.port.id;
     const ra = find(a);
     const rb = find(b);
     if (ra !== rb) parent.set(ra, rb);
+  }
+  const groups = new Map<string, Sides>();
+  const note = (ref: DataCableEnds['a'], role: EndRole) => {
+    const networkId = ref.port.networkId;
+    if (role === 'switch' || networkId === undefined) return;
+    const root = find(ref.port.id);
+    let sides = groups.get(root);
+    if (!sides) groups.set(root, (sides = { host: new Set(), controller: new Set() }));
+    (role === 'host' ? sides.host : sides.controller).add(networkId);
   };
-  const members: [string, string][] = [];
-  for (const ends of dataCables(ctx)) {
-    // A switch is one group; a host or controller port is a group of its own.
-    const key = (ref: typeof ends.a, role: string) => (role === 'switch' ? `switch:${ref.device.id}` : `port:${ref.port.id}`);
-    union(key(ends.a, ends.roleA), key(ends.b, ends.roleB));
-    if (ends.roleA !== 'switch' && ends.a.port.networkId) members.push([key(ends.a, ends.roleA), ends.a.port.networkId]);
-    if (ends.roleB !== 'switch' && ends.b.port.networkId) members.push([key(ends.b, ends.roleB), ends.b.port.networkId]);
+  for (const ends of cables) {
+    note(ends.a, ends.roleA);
+    note(ends.b, ends.roleB);
   }
-  const groups = new Map<string, Set<string>>();
-  for (const [key, networkId] of members) {
-    const root = find(key);
-    const set = groups.get(root);
-    if (set) set.add(networkId);
-    else groups.set(root, new Set([networkId]));
-  }
-  return groups;
+  return [...groups.values()];
 }
 
+function mtuOf(network: Network): number {
+  return network.mtu ?? LIMITS.mtuDefault.value;
+}
+
+/**
+ * mtu-mismatch: a data path joins a host port and a controller port whose data networks have
+ * different MTUs. When both sides of a group have a data network and the group's data networks do
+ * not all share one MTU, some host-side and controller-side pair differs, so the finding names
+ * every data network of the group.
+ */
 function mtuFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
   const seen = new Set<string>();
-  for (const networkIds of joinedNetworks(ctx).values()) {
-    const data = [...networkIds].map((id) => ctx.index.networks.get(id)!).filter((n) => n.purpose === 'data');
-    const mtus = new Set(data.map((n) => n.mtu ?? LIMITS.mtuDefault.value));
-    if (mtus.size < 2) continue;
-    const ids = data.map((n) => n.id).sort();
-    if (seen.has(ids.join('\u0000'))) continue;
-    seen.add(ids.join('\u0000'));
+  const dataNetworks = (ids: Set<string>) =>
+    [...ids].map((id) => ctx.index.networks.get(id)!).filter((n) => n.purpose === 'data');
+  for (const sides of joinedNetworks(ctx)) {
+    const hostSide = dataNetworks(sides.host);
+    const controllerSide = dataNetworks(sides.controller);
+    if (hostSide.length === 0 || controllerSide.length === 0) continue;
+    const data = [...new Set([...hostSide, ...controllerSide])].sort((x, y) => byId(x.id, y.id));
+    if (new Set(data.map(mtuOf)).size < 2) continue;
+    const key = data.map((n) => n.id).join('\u0000');
+    if (seen.has(key)) continue;
+    seen.add(key);
     const list = data.map((n) => `${nameOf(ctx, n.id)} (MTU ${n.mtu ?? `${LIMITS.mtuDefault.value} by default`})`).join(', ');
     out.push({
       rule: 'mtu-mismatch',
       severity: 'error',
-      subjects: ids,
+      subjects: data.map((n) => n.id),
       message: `Data paths join networks with different MTUs: ${list}; frames larger than the smallest are dropped.`,
     });
   }
