@@ -3,7 +3,8 @@ import Svg, { Circle, Path, Rect } from 'react-native-svg';
 import { colors, type ColorName } from '@/components/ui/tokens';
 
 /** Line icons drawn for Cablewright on a 24-unit grid; decorative, so hidden from assistive tech. */
-export type IconName = 'designs' | 'team' | 'account' | 'mailbox' | 'signOut' | 'info' | 'warning' | 'error' | 'success' | 'chevron' | 'back' | 'lock';
+export type IconName = 'designs' | 'team' | 'account' | 'mailbox' | 'signOut' | 'info' | 'warning' | 'error' | 'success' | 'chevron' | 'back' | 'lock'
+  | 'tick' | 'search' | 'download' | 'upload' | 'print' | 'compare' | 'unplugged';
 
 type IconProps = { name: IconName; size?: number; color?: ColorName | string };
 
@@ -85,6 +86,48 @@ const drawings: Record<IconName, (p: Common) => ReactNode> = {
     <>
       <Rect x={5} y={10.5} width={14} height={9.5} rx={2} {...p} />
       <Path d="M8.5 10.5V8a3.5 3.5 0 0 1 7 0v2.5" {...p} />
+    </>
+  ),
+  tick: (p) => <Path d="M5.5 12.5l4.2 4.2 8.8-9.2" {...p} />,
+  search: (p) => (
+    <>
+      <Circle cx={10.5} cy={10.5} r={6} {...p} />
+      <Path d="M15 15l5 5" {...p} />
+    </>
+  ),
+  download: (p) => (
+    <>
+      <Path d="M12 4v11M7.5 10.5 12 15l4.5-4.5" {...p} />
+      <Path d="M4.5 18.5h15" {...p} />
+    </>
+  ),
+  upload: (p) => (
+    <>
+      <Path d="M12 15V4M7.5 8.5 12 4l4.5 4.5" {...p} />
+      <Path d="M4.5 18.5h15" {...p} />
+    </>
+  ),
+  print: (p) => (
+    <>
+      <Rect x={7} y={3.5} width={10} height={5} rx={1} {...p} />
+      <Rect x={4} y={8.5} width={16} height={8} rx={2} {...p} />
+      <Rect x={7} y={13.5} width={10} height={7} rx={1} {...p} />
+    </>
+  ),
+  // Two versions side by side with arrows between them.
+  compare: (p) => (
+    <>
+      <Rect x={3} y={4} width={7} height={16} rx={1.5} {...p} />
+      <Rect x={14} y={4} width={7} height={16} rx={1.5} {...p} />
+      <Path d="M10.5 9h3M12.5 7.5 14 9l-1.5 1.5M13.5 15h-3M11.5 13.5 10 15l1.5 1.5" {...p} />
+    </>
+  ),
+  // A cable end pulled away from its socket, with a break between them.
+  unplugged: (p) => (
+    <>
+      <Path d="M3 12h5M8 8.5v7M8 10h3M8 14h3" {...p} />
+      <Path d="M21 12h-5M16 8.5v7" {...p} />
+      <Path d="M12.8 8.8l1 1.4M12.8 15.2l1-1.4" {...p} />
     </>
   ),
 };

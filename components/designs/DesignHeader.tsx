@@ -1,0 +1,42 @@
+import { StyleSheet, View } from 'react-native';
+import { Link } from 'expo-router';
+import { Button, Heading, Icon, Text, space } from '@/components/ui';
+import { StatusBadge } from '@/components/designs/StatusBadge';
+import { EDITOR_READY, editorHref } from '@/lib/designs/links';
+import type { DesignDto } from '@/shared/api/designs';
+
+type DesignHeaderProps = { design: DesignDto; editor: boolean; uploading: boolean; onUpload: () => void };
+
+/** The design's name, site and status, with the actions that apply to the design as a whole. */
+export function DesignHeader({ design, editor, uploading, onUpload }: DesignHeaderProps) {
+  return (
+    <View style={styles.wrap}>
+      <Link href="/designs" asChild>
+        <Button label="All designs" variant="ghost" size="compact" icon={<Icon name="back" size={18} color="primary" />} testID="design-back" />
+      </Link>
+      <View style={styles.title}>
+        <Heading level={1}>{design.name}</Heading>
+        <StatusBadge status={design.status} testID="design-status" />
+      </View>
+      {design.site ? <Text color="inkMuted">{design.site}</Text> : null}
+      {editor ? (
+        <View style={styles.actions}>
+          {EDITOR_READY ? (
+            <Link href={editorHref(design.id)} asChild>
+              <Button label="Open in editor" testID="design-edit" />
+            </Link>
+          ) : null}
+          {!uploading ? (
+            <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
+          ) : null}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.xs },
+  title: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: space.sm },
+});

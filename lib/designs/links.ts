@@ -1,0 +1,38 @@
+import type { Href } from 'expo-router';
+
+/**
+ * The canvas at /designs/[id]/edit is built separately. Until it ships, "Open in editor" stays
+ * hidden so no link leads nowhere; the canvas flips this one constant when its route exists.
+ */
+export const EDITOR_READY = false;
+
+export const newDesignHref: Href = '/designs/new';
+
+export function designHref(id: number, version?: number): Href {
+  return version === undefined
+    ? { pathname: '/designs/[id]', params: { id } }
+    : { pathname: '/designs/[id]', params: { id, version } };
+}
+
+export function versionHref(id: number, n: number): Href {
+  return { pathname: '/designs/[id]/versions/[n]', params: { id, n } };
+}
+
+export function reportHref(id: number, n: number): Href {
+  return { pathname: '/designs/[id]/versions/[n]/report', params: { id, n } };
+}
+
+export function diffHref(id: number, from: number, to: number): Href {
+  return { pathname: '/designs/[id]/diff', params: { id, from, to } };
+}
+
+/** Typed loosely on purpose: the route file does not exist until the canvas lands (EDITOR_READY). */
+export function editorHref(id: number): Href {
+  return `/designs/${id}/edit` as Href;
+}
+
+/** A route parameter as a positive whole number, or null for anything else ("abc", "-1", "2.5", arrays). */
+export function positiveInt(value: string | string[] | undefined): number | null {
+  if (typeof value !== 'string' || !/^[1-9][0-9]{0,8}$/.test(value)) return null;
+  return Number(value);
+}

@@ -1,0 +1,52 @@
+import type { UnitKind } from '@/shared/analysis/types';
+import { displayName, indexTopology, type TopologyIndex } from '@/shared/topology';
+import type { Topology } from '@/shared/topology/schema';
+import { createNamer } from '@/lib/report/names';
+
+/** One thing a reviewer can fail in the what-if panel, with the words it can be found by. */
+export type FailureUnit = { id: string; kind: UnitKind; name: string; search: string };
+
+export const UNIT_KIND_LABELS: Record<UnitKind, string> = {
+  switch: 'Switch',
+  controller: 'Controller',
+  adapter: 'Card',
+  cable: 'Cable',
+};
+
+/**
+ * Every failure unit of the document (resilience-analysis.md: each cable, card, switch and
+ * controller), the big ones first: switches, controllers, cards, then cables, in document order.
+ */
+export function failureUnits(doc: Topology, index: TopologyIndex = indexTopology(doc)): FailureUnit[] {
+  const namer = createNamer(doc, index);
+  const units: FailureUnit[] = [];
+  const add = (id: string, kind: UnitKind, extra: string[]) => {
+    const name = namer.unit(id);
+    units.push({ id, kind, name, search: [name, id, ...extra].join(' ').toLowerCase() });
+  };
+  for (const device of doc.devices) if (device.kind === 'switch') add(device.id, 'switch', [displayName(device)]);
+  for (const [id, { array }] of index.controllers) add(id, 'controller', [displayName(array)]);
+  for (const [id, { host }] of index.adapters) {
+    // An onboard group holding only management ports is not on any data path; failing it shows nothing.
+    const adapter = index.adapters.get(id)!.adapter;
+    if (adapter.ports.some((p) => p.role === 'data')) add(id, 'adapter', [displayName(host), 'card']);
+  }
+  for (const cable of doc.cables) add(cable.id, 'cable', [cable.label ?? '']);
+  return units;
+}
+
+/**
+ * Units whose every search word appears in their name, id or owner: "cam-rec-2 card" finds that
+ * host's cards, "fab-a" finds the switch and every cable to it. An empty query matches nothing,
+ * so the panel never lists hundreds of cables unasked.
+ */
+export function searchUnits(units: readonly FailureUnit[], query: string, limit = 20): FailureUnit[] {
+  const words = query.toLowerCase().split(/\s+/).filter(Boolean);
+  if (words.length === 0) return [];
+  const found: FailureUnit[] = [];
+  for (const unit of units) {
+    if (words.every((w) => unit.search.includes(w))) found.push(unit);
+    if (found.length >= limit) break;
+  }
+  return found;
+}

@@ -1,0 +1,21 @@
+import type { Finding, HostArrayResult, Report, Severity } from '@/shared/analysis/types';
+import { compareAccess, type PairImpact } from '@/lib/report/whatif';
+
+/**
+ * The report's host rows: one per host and array the baseline reaches. With a simulation each row
+ * also carries the what-if result (null when the host is cut off) and its effect.
+ */
+export type HostRow = { host: string; array: string; before: HostArrayResult; after: HostArrayResult | null; effect: PairImpact['effect'] | null };
+
+export function hostRows(baseline: Report, simulated: Report | null): HostRow[] {
+  if (!simulated) return baseline.hosts.map((before) => ({ host: before.host, array: before.array, before, after: before, effect: null }));
+  return compareAccess(baseline, simulated).map((impact) => ({ ...impact }));
+}
+
+export const SEVERITY_ORDER: readonly Severity[] = ['error', 'warning', 'info'];
+
+export const SEVERITY_TITLES: Record<Severity, string> = { error: 'Errors', warning: 'Warnings', info: 'Notes' };
+
+export function findingsBySeverity(findings: readonly Finding[]): { severity: Severity; findings: Finding[] }[] {
+  return SEVERITY_ORDER.map((severity) => ({ severity, findings: findings.filter((f) => f.severity === severity) }));
+}
