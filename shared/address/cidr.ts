@@ -7,7 +7,14 @@ import { familyBits, formatIp, parseIp, type Family, type Ip } from '@/shared/ad
  * interface identifier is the subnet-router anycast address (RFC 4291 §2.6.1), not for hosts,
  * except on /127 point-to-point links (RFC 6164) and /128.
  */
-export type Cidr = { family: Family; prefix: number; network: bigint; last: bigint };
+export type Cidr = {
+  family: Family;
+  prefix: number;
+  network: bigint;
+  last: bigint;
+  /** The address as written before the prefix; differs from `network` when host bits are set. */
+  written: bigint;
+};
 
 export function parseCidr(text: string): Cidr | null {
   if (typeof text !== 'string') return null;
@@ -15,17 +22,31 @@ export function parseCidr(text: string): Cidr | null {
   if (slash < 0 || slash !== text.lastIndexOf('/')) return null;
   const ip = parseIp(text.slice(0, slash));
   const prefixText = text.slice(slash + 1);
-  if (!ip || !/^\d{1,3}$/.test(prefixText)) return null;
+  // A prefix length has no leading zeros in the notation tools print (common practice): "/024" is a slip.
+  if (!ip || !/^(0|[1-9]\d{0,2})$/.test(prefixText)) return null;
   const prefix = Number(prefixText);
   const bits = familyBits(ip.family);
   if (prefix > bits) return null;
   const size = BigInt(1) << BigInt(bits - prefix);
   const network = (ip.value / size) * size;
-  return { family: ip.family, prefix, network, last: network + size - BigInt(1) };
+  return { family: ip.family, prefix, network, last: network + size - BigInt(1), written: ip.value };
 }
 
 export function isValidCidr(text: string): boolean {
   return parseCidr(text) !== null;
+}
+
+/**
+ * Whether the block is written with host bits set (`198.51.100.7/24`). Readable, and read as the
+ * block it lies in (`198.51.100.0/24`), so the schema accepts it and the analysis reports it.
+ */
+export function hasHostBits(block: Cidr): boolean {
+  return block.written !== block.network;
+}
+
+/** The block in canonical text: network address and prefix (`198.51.100.0/24`). */
+export function formatCidr(block: Cidr): string {
+  return `${formatIp({ family: block.family, value: block.network })}/${block.prefix}`;
 }
 
 /** The network address of a block, as text (`198.51.100.0`). */

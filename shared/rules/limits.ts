@@ -12,6 +12,7 @@ export const LIMITS = {
   vlanMax: { value: 4094, unit: 'VLAN id', source: 'IEEE 802.1Q (0 and 4095 are reserved)' },
   mtuDefault: { value: 1500, unit: 'bytes', source: 'RFC 894 (erratum 570): Ethernet MTU 1500' },
   mtuMin: { value: 576, unit: 'bytes', source: 'RFC 791 §3.1: every host must accept 576-byte datagrams' },
+  mtuMinIpv6: { value: 1280, unit: 'bytes', source: 'RFC 8200 §5: every IPv6 link has an MTU of at least 1280' },
   mtuMax: { value: 9216, unit: 'bytes', source: 'common practice: the largest jumbo frame switches accept' },
   iscsiNameMaxBytes: { value: 223, unit: 'bytes of UTF-8', source: 'RFC 7143 §4.2.7.1' },
   chapSecretMinBytes: { value: 12, unit: 'bytes', source: 'RFC 7143 §9.2.1: under 96 bits needs IPsec' },
@@ -19,6 +20,12 @@ export const LIMITS = {
   iscsiTcpPort: { value: 3260, unit: 'TCP port', source: 'RFC 7143 §15' },
   rackUnitMm: { value: 44.45, unit: 'mm', source: 'EIA-310-D / IEC 60297: 1U = 1.75 in' },
 } as const satisfies Record<string, Limit>;
+
+/** Link-local ranges: addresses a host gives itself when nothing else is set; no place for a storage subnet. */
+export const LINK_LOCAL_RANGES = [
+  { cidr: '169.254.0.0/16', source: 'RFC 3927 §2.1' },
+  { cidr: 'fe80::/10', source: 'RFC 4291 §2.5.6' },
+] as const;
 
 /** The reach of one medium at one link speed. */
 export type Reach = { media: Media; speedGbps: PortSpeed; maxM: number; source: string };

@@ -7,6 +7,11 @@ import { isValidIp } from '@/shared/address/ip';
  * unreadable is rejected here; every drafting mistake is left to the analysis as a finding, so a
  * draft can always be saved. Cross-references (unique ids, cable ends, network ids) are checked in
  * validate.ts because zod sees one value at a time.
+ *
+ * Addresses: a malformed IP address or CIDR is rejected (not a dotted quad or IPv6 text, a prefix
+ * longer than the family, a prefix with leading zeros). A CIDR written with host bits set
+ * (`198.51.100.7/24`) is well formed and unambiguous — it is read as the block it lies in — so it
+ * is a drafting slip: accepted here and reported by the analysis as `cidr-host-bits`.
  */
 export const TOPOLOGY_FORMAT = 'cablewright.topology/1';
 

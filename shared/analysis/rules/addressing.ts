@@ -17,6 +17,10 @@ function blocks(ctx: AnalysisContext): Map<string, Cidr> {
   return map;
 }
 
+function reservedWord(ip: { family: string }): string {
+  return ip.family === 'ipv4' ? 'the network or broadcast address' : 'the subnet-router anycast address';
+}
+
 function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>): Finding[] {
   const { port } = ref;
   const network = port.networkId ? ctx.index.networks.get(port.networkId) : undefined;
@@ -51,7 +55,7 @@ function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs
       message: `${label} has ${port.address.ip}, which is outside ${displayName(network)} (${network.cidr}).`,
     });
   } else if (isReservedInBlock(block, ip)) {
-    const what = ip.family === 'ipv4' ? 'the network or broadcast address' : 'the subnet-router anycast address';
+    const what = reservedWord(ip);
     out.push({
       rule: 'address-reserved',
       severity: 'error',
@@ -67,13 +71,22 @@ function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Findin
   for (const network of ctx.doc.networks) {
     const block = cidrs.get(network.id);
     const gateway = network.gateway ? ipOf(ctx, network.gateway) : null;
-    if (!block || !gateway || containsIp(block, gateway)) continue;
-    out.push({
-      rule: 'address-outside-network',
-      severity: 'error',
-      subjects: [network.id],
-      message: `The gateway ${network.gateway} of ${displayName(network)} is outside ${network.cidr}.`,
-    });
+    if (!block || !gateway) continue;
+    if (!containsIp(block, gateway)) {
+      out.push({
+        rule: 'address-outside-network',
+        severity: 'error',
+        subjects: [network.id],
+        message: `The gateway ${network.gateway} of ${displayName(network)} is outside ${network.cidr}.`,
+      });
+    } else if (isReservedInBlock(block, gateway)) {
+      out.push({
+        rule: 'address-reserved',
+        severity: 'error',
+        subjects: [network.id],
+        message: `The gateway ${network.gateway} of ${displayName(network)} is ${reservedWord(gateway)} of ${network.cidr}.`,
+      });
+    }
   }
   return out;
 }

@@ -21,6 +21,8 @@ export const RULES = {
   'management-data-bridge': 'error',
   'shared-switch-in-use': 'warning',
   'network-overlap': 'error',
+  'cidr-host-bits': 'warning',
+  'network-link-local': 'warning',
   'management-data-same-subnet': 'error',
   'address-outside-network': 'error',
   'address-duplicate': 'error',

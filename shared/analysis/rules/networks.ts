@@ -1,14 +1,15 @@
-import { parseCidr, type Cidr } from '@/shared/address/cidr';
+import { blocksOverlap, formatCidr, hasHostBits, parseCidr, type Cidr } from '@/shared/address/cidr';
 import { byId, dataCables, nameOf, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
-import { LIMITS } from '@/shared/rules/limits';
+import { LIMITS, LINK_LOCAL_RANGES } from '@/shared/rules/limits';
 import type { Network } from '@/shared/topology/schema';
 import { displayName } from '@/shared/topology/index';
 
 /**
  * Network-level rules: overlapping subnets (between two data or two management networks an overlap
  * is network-overlap; between a management and a data network it is management-data-same-subnet),
- * VLAN ids and MTUs out of range, and MTU mismatch where a data path joins networks of different
+ * VLAN ids and MTUs out of range (an IPv6 network also below 1280), a subnet written with host bits
+ * set or inside a link-local range, and MTU mismatch where a data path joins networks of different
  * MTU. A network without an MTU runs the Ethernet default of 1500 (RFC 894).
  */
 function overlapFindings(ctx: AnalysisContext): Finding[] {
@@ -55,6 +56,43 @@ function rangeFindings(ctx: AnalysisContext): Finding[] {
         severity: 'error',
         subjects: [network.id],
         message: `MTU ${network.mtu} of ${name} is outside ${LIMITS.mtuMin.value}–${LIMITS.mtuMax.value}.`,
+      });
+    } else if (network.mtu !== undefined && network.mtu < LIMITS.mtuMinIpv6.value && parseCidr(network.cidr)?.family === 'ipv6') {
+      out.push({
+        rule: 'mtu-out-of-range',
+        severity: 'error',
+        subjects: [network.id],
+        message: `MTU ${network.mtu} of ${name} is below ${LIMITS.mtuMinIpv6.value}, the least an IPv6 link may have.`,
+      });
+    }
+  }
+  return out;
+}
+
+const LINK_LOCAL = LINK_LOCAL_RANGES.map((range) => ({ ...range, block: parseCidr(range.cidr)! }));
+
+/** How a subnet is written: host bits set (read as the block it lies in), or a link-local range. */
+function blockFindings(ctx: AnalysisContext): Finding[] {
+  const out: Finding[] = [];
+  for (const network of ctx.doc.networks) {
+    const block = parseCidr(network.cidr);
+    if (!block) continue;
+    const name = displayName(network);
+    if (hasHostBits(block)) {
+      out.push({
+        rule: 'cidr-host-bits',
+        severity: 'warning',
+        subjects: [network.id],
+        message: `The subnet of ${name} is written ${network.cidr}, with host bits set; it is read as ${formatCidr(block)}. Write the network address.`,
+      });
+    }
+    const local = LINK_LOCAL.find((range) => blocksOverlap(range.block, block));
+    if (local) {
+      out.push({
+        rule: 'network-link-local',
+        severity: 'warning',
+        subjects: [network.id],
+        message: `${name} (${network.cidr}) lies in the link-local range ${local.cidr}, which hosts give themselves when no address is set; storage ports need a routable subnet.`,
       });
     }
   }
@@ -142,5 +180,5 @@ function mtuFindings(ctx: AnalysisContext): Finding[] {
 }
 
 export function networkFindings(ctx: AnalysisContext): Finding[] {
-  return [...overlapFindings(ctx), ...rangeFindings(ctx), ...mtuFindings(ctx)];
+  return [...overlapFindings(ctx), ...rangeFindings(ctx), ...blockFindings(ctx), ...mtuFindings(ctx)];
 }
