@@ -4,8 +4,11 @@ import type { Topology } from '@/shared/topology/schema';
 
 /**
  * Direct attach: no switches. Each host's storage ports go straight to the controllers in turn
- * (card 1 to ctl-a, card 2 to ctl-b, …), each controller on a subnet of its own, so every host
- * reaches every controller over a card and a cable of its own. Controllers get one port per host.
+ * (card 1 to ctl-a, card 2 to ctl-b, …, and with more controllers than cards, port 2 of card 1 to
+ * the next one), each controller on a subnet of its own, so every host reaches every controller
+ * over a cable of its own and, with two cards or more, loses no controller to one card. A host
+ * with fewer storage ports than there are controllers reaches only as many controllers as it has
+ * ports. Controllers get one port per host.
  */
 export function directAttach(options: PatternOptions = {}): Topology {
   const names = hostNames(options.hosts);
@@ -24,11 +27,11 @@ export function directAttach(options: PatternOptions = {}): Topology {
   const netIds = Array.from({ length: controllerCount }, (_, c) => `net-${controllerName(c)}`);
   netIds.forEach((id, c) => b.network({ id, name: `direct ${controllerName(c)}`, purpose: 'data', cidr: ranges[c], mtu: 9000 }));
 
-  // Host storage ports: port 1 of each card when there are enough cards, else the ports of one card.
-  const storage = cards >= controllerCount
-    ? Array.from({ length: cards }, (_, c) => ({ card: c, port: 0 }))
-    : Array.from({ length: Math.min(perCard, controllerCount) }, (_, p) => ({ card: 0, port: p }));
-  const links = storage.slice(0, controllerCount);
+  // Host storage ports, controller by controller: card 1, card 2, … while cards last, then the next
+  // port of each card in turn, so no card carries two controllers while another card sits idle.
+  const links = Array.from({ length: controllerCount }, (_, c) => ({ card: c % cards, port: Math.floor(c / cards) })).filter(
+    (s) => s.port < perCard,
+  );
   const perController = names.length;
 
   const controllers = Array.from({ length: controllerCount }, (_, c) =>

@@ -25,6 +25,15 @@ describe('pattern starters', () => {
     expect(report.hosts.map((p) => p.singlePointsOfFailure)).toEqual([['host-1.card-1'], ['host-2.card-1']]);
   });
 
+  it('spreads direct attach over both cards when the array has more controllers than the host has cards', () => {
+    // four controllers, two dual-port cards: card-1.p1 → ctl-a, card-2.p1 → ctl-b, card-1.p2 → ctl-c, card-2.p2 → ctl-d
+    const report = analyze(directAttach({ hosts: 2, controllers: 4, cardsPerHost: 2, portsPerCard: 2 }));
+    expect(report.hosts.map((p) => [p.sessions, p.controllersReached.length, p.redundant])).toEqual([
+      [4, 4, true],
+      [4, 4, true],
+    ]);
+  });
+
   it('is deterministic, ids included', () => {
     expect(JSON.stringify(dualFabricWithManagement({ hosts: 3 }))).toBe(JSON.stringify(dualFabricWithManagement({ hosts: 3 })));
     expect(directAttach({ hosts: ['db-1'] }).devices.map((d) => d.id)).toEqual(['array-1', 'db-1']);
