@@ -13,12 +13,13 @@ export type SeedOutcome = { seeded: boolean; accounts: DemoAccount[] };
  * would never be seeded again). A database with any user is left alone. The caller checks SEED and
  * never calls this in production (server/config.ts refuses SEED=demo there).
  */
-export async function seedDemo(sequelize: Sequelize, passwords: Passwords): Promise<SeedOutcome> {
+export async function seedDemo(sequelize: Sequelize, passwords: Passwords, { designs = true }: { designs?: boolean } = {}): Promise<SeedOutcome> {
   const models = getModels(sequelize);
   const seeded = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
     if ((await models.User.count({ transaction })) > 0) return false;
     const people = await seedTeamsAndUsers(models, passwords, transaction);
-    await seedDesigns(sequelize, models, people, transaction);
+    // Only tests about people and teams leave the designs out, to stay quick.
+    if (designs) await seedDesigns(sequelize, models, people, transaction);
     return true;
   });
   return { seeded, accounts: await presentAccounts(sequelize) };

@@ -4,7 +4,7 @@ import { DEMO, DEMO_PASSWORD, makeTestApp, sessionCookie, sessionSetCookie, sign
 
 let t: TestApp;
 beforeEach(async () => {
-  t = await makeTestApp();
+  t = await makeTestApp({ seed: 'people' });
 });
 afterEach(() => t.close());
 

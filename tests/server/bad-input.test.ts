@@ -5,7 +5,7 @@ import { DEMO, DEMO_PASSWORD, makeTestApp, signInAs, type TestApp } from './help
 let t: TestApp;
 beforeEach(async () => {
   // A fresh app per test: the sign-in rate limit counts the junk and the bad bodies too.
-  t = await makeTestApp();
+  t = await makeTestApp({ seed: 'people' });
 });
 afterEach(() => t.close());
 

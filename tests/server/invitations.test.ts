@@ -4,7 +4,7 @@ import { APP_ORIGIN, DEMO, makeTestApp, signInAs, type TestApp } from './helpers
 
 let t: TestApp;
 beforeEach(async () => {
-  t = await makeTestApp();
+  t = await makeTestApp({ seed: 'people' });
 });
 afterEach(() => t.close());
 

@@ -4,7 +4,7 @@ import { APP_ORIGIN, DEMO, DEMO_PASSWORD, makeTestApp, type TestApp } from './he
 
 let t: TestApp;
 beforeEach(async () => {
-  t = await makeTestApp();
+  t = await makeTestApp({ seed: 'people' });
 });
 afterEach(() => t.close());
 

@@ -3,7 +3,7 @@ import { DEMO, makeTestApp, signInAs, type DemoWho, type TestApp } from './helpe
 
 let t: TestApp;
 beforeEach(async () => {
-  t = await makeTestApp();
+  t = await makeTestApp({ seed: 'people' });
 });
 afterEach(() => t.close());
 

@@ -46,18 +46,19 @@ export type TestApp = {
 };
 
 /**
- * A migrated app; `seed` (default true) adds the demo teams, people and designs. In memory unless
+ * A migrated app; `seed` (default true) adds the demo teams, people and designs, `'people'` only the
+ * teams and people (quicker, for tests that never look at a design). In memory unless
  * `databasePath` names a file (for what only a file database shows: WAL, several connections).
  */
 export async function makeTestApp({
   env = {},
   seed = true,
   databasePath = ':memory:',
-}: { env?: Record<string, string>; seed?: boolean; databasePath?: string } = {}): Promise<TestApp> {
+}: { env?: Record<string, string>; seed?: boolean | 'people'; databasePath?: string } = {}): Promise<TestApp> {
   const config = loadConfig({ ...TEST_ENV, ...env });
   const sequelize = await openDatabase(databasePath);
   await migrate(sequelize);
-  if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost));
+  if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost), { designs: seed !== 'people' });
   const mailer = await createMailer(config);
   const app = createApp({ sequelize, mailer, config });
   return {
