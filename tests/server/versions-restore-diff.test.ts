@@ -32,6 +32,7 @@ describe('reading a version', () => {
 
   it('answers 404 for a version number the design does not have, and 400 for one that is not a number', async () => {
     const missing = await ravi.get(`/api/designs/${id}/versions/9`);
+    // RFC 9110 §15.5.5: 404 Not Found; §15.5.1: 400 Bad Request for a malformed path parameter.
     expect(missing.status).toBe(404);
     expect(missing.body.error).toBe('This design has no version 9.');
     const bad = await ravi.get(`/api/designs/${id}/versions/first`);
@@ -69,6 +70,7 @@ describe('restoring a version', () => {
 
   it('needs a message, and answers 404 for a version that does not exist', async () => {
     const bare = await ravi.post(`/api/designs/${id}/versions/1/restore`).send({});
+    // RFC 9110 §15.5.1: 400 Bad Request.
     expect(bare.status).toBe(400);
     expect(paths(bare.body)).toEqual(['message']);
     await ravi.post(`/api/designs/${id}/versions/7/restore`).send({ message: 'x' }).expect(404);
@@ -102,6 +104,7 @@ describe('the diff between two versions', () => {
 
   it('answers 404 for a missing `against` version and 400 for a missing or malformed one', async () => {
     const missing = await ravi.get(`/api/designs/${id}/versions/2/diff?against=9`);
+    // RFC 9110 §15.5.5 404 for a version that is not there; §15.5.1 400 for a query that is not a version number.
     expect(missing.status).toBe(404);
     expect(missing.body.error).toBe('This design has no version 9.');
     for (const query of ['', '?against=one', '?against=0', '?against=1&extra=2']) {
