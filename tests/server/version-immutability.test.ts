@@ -1,6 +1,6 @@
 import { UniqueConstraintError } from 'sequelize';
 import { makeTestApp, signInAs, type TestApp } from './helpers/app';
-import { designId } from './helpers/designs';
+import { designId, harborV2 } from './helpers/designs';
 
 let t: TestApp;
 let id: number;
@@ -48,5 +48,31 @@ describe('saved versions and review events never change', () => {
     if (!v2) throw new Error('no seeded version 2');
     const { id: _id, ...copy } = v2.get({ plain: true });
     await expect(t.models.DesignVersion.create({ ...copy, message: 'Twin' })).rejects.toBeInstanceOf(UniqueConstraintError);
+  });
+
+  it('answers a save that loses on the unique index with 409 and the real latest version, never a 500', async () => {
+    const ravi = await signInAs(t.app, 'designer');
+    // Make the two "latest version" reads inside the save's transaction see a stale 1, as a writer
+    // that bypassed the IMMEDIATE lock would: the insert of number 2 then meets the unique index.
+    const real = t.models.DesignVersion.findOne.bind(t.models.DesignVersion);
+    const stale = jest
+      .spyOn(t.models.DesignVersion, 'findOne')
+      .mockImplementationOnce(async () => ({ number: 1 }) as never)
+      .mockImplementationOnce(async () => ({ number: 1 }) as never)
+      .mockImplementation(real);
+    const insert = jest.spyOn(t.models.DesignVersion, 'create');
+    try {
+      const res = await ravi.post(`/api/designs/${id}/versions`).send({ baseVersion: 1, message: 'Stale', document: { ...harborV2() } });
+      // RFC 9110 §15.5.10: 409 Conflict.
+      expect(res.status).toBe(409);
+      expect(res.body.latestVersion).toBe(2);
+      // The base check passed on the stale read, so the insert ran and the unique index refused it.
+      expect(insert).toHaveBeenCalledTimes(1);
+      await expect(insert.mock.results[0].value).rejects.toBeInstanceOf(UniqueConstraintError);
+    } finally {
+      stale.mockRestore();
+      insert.mockRestore();
+    }
+    expect(await t.models.DesignVersion.count({ where: { designId: id } })).toBe(2);
   });
 });
