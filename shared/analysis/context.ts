@@ -112,6 +112,11 @@ export function describeUnit(ctx: AnalysisContext, id: string): string {
   return device ? `${KIND_WORDS.switch} ${displayName(device)}` : id;
 }
 
+/** "Cable HR-A-07 …": a unit description opening a sentence (our own word comes first). */
+export function atSentenceStart(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
 export function nameOf(ctx: AnalysisContext, id: string): string {
   const device = ctx.index.devices.get(id);
   if (device) return displayName(device);

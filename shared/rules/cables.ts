@@ -15,6 +15,17 @@ export function connectorFor(media: Media): 'rj45' | 'sfp' {
   return MEDIA_CONNECTOR[media];
 }
 
+/** Media as the trade writes them, for messages. */
+export const MEDIA_NAMES: Record<Media, string> = {
+  cat5e: 'Category 5e',
+  cat6: 'Category 6',
+  cat6a: 'Category 6A',
+  om3: 'OM3 fibre',
+  om4: 'OM4 fibre',
+  dac: 'direct-attach copper',
+  aoc: 'active optical cable',
+};
+
 /** A link runs at the lower of its two ends' speeds. */
 export function linkSpeed(a: number, b: number): number {
   return Math.min(a, b);

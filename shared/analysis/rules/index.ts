@@ -37,6 +37,8 @@ export const RULES = {
   'media-unsuited': 'error',
   'cable-too-long': 'error',
   'cable-unmeasured': 'info',
+  'cable-between-endpoints': 'warning',
+  'port-role-mismatch': 'error',
   'iqn-invalid': 'error',
   'iqn-duplicate': 'error',
   'iqn-missing': 'info',

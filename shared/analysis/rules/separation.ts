@@ -1,4 +1,4 @@
-import { describeUnit, nameOf, type AnalysisContext } from '@/shared/analysis/context';
+import { atSentenceStart, describeUnit, nameOf, type AnalysisContext } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
 import { portLabel, type PortRef } from '@/shared/topology/index';
 
@@ -25,7 +25,7 @@ function cableFindings(ctx: AnalysisContext, cableId: string, x: PortRef, y: Por
         rule: 'management-data-bridge',
         severity: 'error',
         subjects: [management.id, other.id, cableId],
-        message: `${cable} joins management switch ${nameOf(ctx, management.id)} to ${other.role} switch ${nameOf(ctx, other.id)}, bridging management into the storage fabric.`,
+        message: `${atSentenceStart(cable)} joins management switch ${nameOf(ctx, management.id)} to ${other.role} switch ${nameOf(ctx, other.id)}, bridging management into the storage fabric.`,
       },
     ];
   }
