@@ -23,7 +23,7 @@ describe('single points of failure on the named topologies', () => {
     const report = analyze(T.oneSwitch());
     expect(pair(report, 'h1', 'v')).toMatchObject({ sessions: 4, singlePointsOfFailure: ['fa'] });
     const finding = report.findings.find((f) => f.rule === 'single-point-of-failure')!;
-    expect(finding.message).toBe('h1 reaches v only through switch fa; losing any one of them cuts it off.');
+    expect(finding.message).toBe('h1 reaches v only through switch fa; losing it cuts h1 off from v.');
   });
 
   it('counts four sessions and no single point of failure on two clean fabrics', () => {
@@ -61,7 +61,9 @@ describe('single points of failure on the named topologies', () => {
   it('reports the controller and one-controller-only when only one controller is cabled', () => {
     const report = analyze(T.oneControllerCabled());
     expect(pair(report, 'h1', 'v')).toMatchObject({ controllersReached: ['v.a'], singlePointsOfFailure: ['v.a'] });
-    expect(report.findings.find((f) => f.rule === 'one-controller-only')!.subjects).toEqual(['h1', 'v', 'v.a']);
+    const finding = report.findings.find((f) => f.rule === 'one-controller-only')!;
+    expect(finding.subjects).toEqual(['h1', 'v', 'v.a']);
+    expect(finding.message).toBe('h1 reaches only controller a of v; when that controller fails or restarts for an update, h1 loses v.');
   });
 
   it('does not let a host carry another host to its storage', () => {

@@ -36,7 +36,7 @@ export function redundancyFindings(ctx: AnalysisContext, hosts: HostArrayResult[
         rule: 'single-point-of-failure',
         severity: 'error',
         subjects: [pair.host, pair.array, ...pair.singlePointsOfFailure],
-        message: `${host} reaches ${array} only through ${unitList(ctx, pair.singlePointsOfFailure)}; losing any one of them cuts it off.`,
+        message: `${host} reaches ${array} only through ${unitList(ctx, pair.singlePointsOfFailure)}; losing ${pair.singlePointsOfFailure.length === 1 ? 'it' : 'any one of them'} cuts ${host} off from ${array}.`,
       });
     }
     const device = ctx.index.devices.get(pair.array);
@@ -47,7 +47,7 @@ export function redundancyFindings(ctx: AnalysisContext, hosts: HostArrayResult[
         rule: 'one-controller-only',
         severity: 'error',
         subjects: [pair.host, pair.array, controller],
-        message: `${host} reaches only ${describeUnit(ctx, controller)}; it has no path to the other controllers and loses ${array} when that one fails over.`,
+        message: `${host} reaches only ${describeUnit(ctx, controller)}; when that controller fails or restarts for an update, ${host} loses ${array}.`,
       });
     }
   }
