@@ -34,7 +34,7 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
   }
   const { design: info } = design.data;
   const panel = (version: NonNullable<typeof shown>) => (
-    <VersionPanel designId={id} designName={info.name} version={version} latestNumber={latest ?? version.number} viewer={viewer} onSelect={onSelect} />
+    <VersionPanel designId={id} designName={info.name} version={version} latestNumber={latest ?? version.number} viewer={viewer} onSelect={onSelect} embedded={!wide} />
   );
   const list = (
     <VersionList designId={id} versions={versions} selected={shown?.number ?? null} onSelect={onSelect} renderSelected={wide ? undefined : panel} />

@@ -22,10 +22,11 @@ function stats(summary: ReportSummary): Stat[] {
 }
 
 /** The four numbers a reviewer reads first; marked when they come from a simulation. */
-export function ReportHeadline({ summary, simulated }: { summary: ReportSummary; simulated: boolean }) {
+/** `simulatedWith`: the names of the failed units when the numbers come from a simulation. */
+export function ReportHeadline({ summary, simulatedWith }: { summary: ReportSummary; simulatedWith: readonly string[] | null }) {
   return (
     <View style={styles.wrap} testID="report-headline" aria-label={`${plural(summary.redundantHosts, 'host')} of ${summary.hosts} redundant`}>
-      {simulated ? <Badge label="Simulated: with the failures picked below" tone="copper" testID="report-headline-simulated" /> : null}
+      {simulatedWith ? <Badge label={`Simulation: ${simulatedWith.join(', ')} failed`} tone="copper" testID="report-headline-simulated" /> : null}
       <View style={styles.row}>
         {stats(summary).map((stat) => (
           <View key={stat.key} style={styles.stat} testID={`report-headline-${stat.key}`}>

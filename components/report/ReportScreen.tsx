@@ -40,6 +40,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
   const name = design.data?.design.name ?? doc?.name ?? 'Design';
   const baseline = saved.data;
   const shown = whatIf.simulated ?? baseline ?? null;
+  const failedNames = lookups ? whatIf.settled.map(lookups.namer.unit) : [];
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_BREAKPOINT;
   const rows = baseline ? hostRows(baseline.report, whatIf.simulated?.report ?? null) : [];
@@ -60,13 +61,13 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
       <QueryStatus query={saved} what="The report" testID="report-error" />
       {shown && lookups && baseline ? (
         <>
-          <ReportHeadline summary={shown.summary} simulated={whatIf.simulated !== null} />
+          <ReportHeadline summary={shown.summary} simulatedWith={whatIf.simulated ? failedNames : null} />
           <View style={wide ? styles.columns : styles.stack}>
             <View style={wide ? styles.side : styles.stack}>
               <WhatIfPanel units={lookups.units} failed={whatIf.failed} onChange={whatIf.setFailed} />
               {whatIf.simulated ? (
                 <WhatIfImpact
-                  failedNames={whatIf.settled.map(lookups.namer.unit)}
+                  failedNames={failedNames}
                   rows={rows}
                   namer={lookups.namer}
                   pending={whatIf.pending}

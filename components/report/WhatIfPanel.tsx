@@ -43,7 +43,10 @@ export function WhatIfPanel({ units, failed, onChange }: WhatIfPanelProps) {
               key={unit.id}
               role="button"
               aria-label={`Fail ${unit.name}`}
-              onPress={() => onChange([...failed, unit.id])}
+              onPress={() => {
+                onChange([...failed, unit.id]);
+                setQuery('');
+              }}
               style={({ pressed }) => [styles.result, pressed && styles.pressed]}
               testID={`whatif-add-${unit.id}`}
             >

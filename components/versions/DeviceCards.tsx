@@ -1,5 +1,5 @@
-import { StyleSheet, View } from 'react-native';
-import { Card, DataTable, Heading, Text, space, type Column } from '@/components/ui';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { Card, DataTable, Heading, Text, colors, space, type Column } from '@/components/ui';
 import type { DeviceView, PortRow } from '@/lib/designs/document-view';
 
 const PORT_COLUMNS: readonly Column<keyof Omit<PortRow, 'id'>>[] = [
@@ -11,8 +11,13 @@ const PORT_COLUMNS: readonly Column<keyof Omit<PortRow, 'id'>>[] = [
   { key: 'cabledTo', label: 'Cabled to', flex: 2.6 },
 ];
 
+/** Below this width a port is three short lines instead of a table row. */
+const TABLE_MIN_WIDTH = 900;
+
 /** Each device with its controllers or cards and their ports, addresses and where each is cabled. */
 export function DeviceCards({ devices }: { devices: readonly DeviceView[] }) {
+  const { width } = useWindowDimensions();
+  const narrow = width < TABLE_MIN_WIDTH;
   return (
     <View style={styles.list} testID="version-devices">
       {devices.map((device) => (
@@ -26,13 +31,13 @@ export function DeviceCards({ devices }: { devices: readonly DeviceView[] }) {
           {device.groups.map((group) => (
             <View key={group.id} style={styles.group}>
               <Text variant="smallStrong">{group.title}</Text>
-              {group.ports.length > 0 ? (
-                <DataTable label={`${device.name} ${group.title}`} columns={PORT_COLUMNS} rows={group.ports} stackBelow={900} />
-              ) : (
+              {group.ports.length > 0 && narrow ? <PortLines ports={group.ports} /> : null}
+              {group.ports.length > 0 && !narrow ? <DataTable label={`${device.name} ${group.title}`} columns={PORT_COLUMNS} rows={group.ports} stackBelow={0} /> : null}
+              {group.ports.length === 0 ? (
                 <Text variant="small" color="inkMuted">
                   No ports
                 </Text>
-              )}
+              ) : null}
             </View>
           ))}
         </Card>
@@ -41,7 +46,24 @@ export function DeviceCards({ devices }: { devices: readonly DeviceView[] }) {
   );
 }
 
+/** Phone form of a port: what it is, how it is addressed, where its cable goes. */
+function PortLines({ ports }: { ports: readonly PortRow[] }) {
+  return (
+    <View role="list" style={styles.ports}>
+      {ports.map((port) => (
+        <View key={port.id} role="listitem" style={styles.port} testID={`port-${port.id}`}>
+          <Text variant="smallStrong">{`${port.name} · ${port.role} · ${port.speed}`}</Text>
+          <Text variant="small">{`${port.network === 'none' ? 'no network' : port.network} · ${port.address === 'none' ? 'no address' : port.address}`}</Text>
+          <Text variant="small" color="inkMuted">{port.cabledTo === 'not cabled' ? 'not cabled' : `→ ${port.cabledTo}`}</Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
+  ports: { gap: 0 },
+  port: { paddingVertical: space.xs, borderTopWidth: 1, borderTopColor: colors.line },
   list: { gap: space.md },
   head: { gap: 2 },
   group: { gap: space.xs },

@@ -19,22 +19,28 @@ type VersionPanelProps = {
   latestNumber: number;
   viewer: { id: number; role: Role };
   onSelect: (n: number) => void;
+  /** Under its own row in the phone list, which already shows the message, author and summary. */
+  embedded?: boolean;
 };
 
 /** The selected version: what it is, what to do with it, and its review. */
-export function VersionPanel({ designId, designName, version, latestNumber, viewer, onSelect }: VersionPanelProps) {
+export function VersionPanel({ designId, designName, version, latestNumber, viewer, onSelect, embedded = false }: VersionPanelProps) {
   const [restoring, setRestoring] = useState(false);
   const editor = can(viewer.role, 'editDesigns');
   const n = version.number;
   return (
     <View style={styles.wrap} testID="version-panel">
-      <View style={styles.head}>
-        <Heading level={2}>{`Version ${n}${n === latestNumber ? ' (latest)' : ''}`}</Heading>
-        <StatusBadge status={version.review.state} />
-      </View>
-      <Text>{version.message}</Text>
-      <Text variant="small" color="inkMuted">{`Saved by ${version.author.name}, ${formatDateTime(version.createdAt)}`}</Text>
-      <SummaryLine summary={version.summary} testID="version-panel-summary" />
+      {embedded ? null : (
+        <>
+          <View style={styles.head}>
+            <Heading level={2}>{`Version ${n}${n === latestNumber ? ' (latest)' : ''}`}</Heading>
+            <StatusBadge status={version.review.state} />
+          </View>
+          <Text>{version.message}</Text>
+          <Text variant="small" color="inkMuted">{`Saved by ${version.author.name}, ${formatDateTime(version.createdAt)}`}</Text>
+          <SummaryLine summary={version.summary} testID="version-panel-summary" />
+        </>
+      )}
       <View style={styles.actions}>
         <Link href={reportHref(designId, n)} asChild>
           <Button label="Failure report" size="compact" icon={<Icon name="warning" size={18} color="onPrimary" />} testID="version-report" />

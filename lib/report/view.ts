@@ -7,9 +7,18 @@ import { compareAccess, type PairImpact } from '@/lib/report/whatif';
  */
 export type HostRow = { host: string; array: string; before: HostArrayResult; after: HostArrayResult | null; effect: PairImpact['effect'] | null };
 
+function weight(row: HostRow): number {
+  if (row.effect === 'lost') return 0;
+  if (!row.after?.redundant) return 1;
+  return row.effect === 'reduced' ? 2 : 3;
+}
+
+/** Worst first: cut off, then not redundant, then reduced by the simulation; report order within each. */
 export function hostRows(baseline: Report, simulated: Report | null): HostRow[] {
-  if (!simulated) return baseline.hosts.map((before) => ({ host: before.host, array: before.array, before, after: before, effect: null }));
-  return compareAccess(baseline, simulated).map((impact) => ({ ...impact }));
+  const rows: HostRow[] = simulated
+    ? compareAccess(baseline, simulated)
+    : baseline.hosts.map((before) => ({ host: before.host, array: before.array, before, after: before, effect: null }));
+  return rows.map((row, i) => ({ row, i })).sort((x, y) => weight(x.row) - weight(y.row) || x.i - y.i).map(({ row }) => row);
 }
 
 export const SEVERITY_ORDER: readonly Severity[] = ['error', 'warning', 'info'];
