@@ -9,20 +9,26 @@ import { iteratePorts, portPath } from '@/shared/topology/index';
  */
 type Kind = 'device' | 'controller' | 'card' | 'port' | 'cable' | 'network';
 
-type Owner = { kind: Kind; path: string };
+/**
+ * The first holder of an id, and every kind that claimed it: when an id is used twice, the
+ * duplicate is the one problem reported, and a reference that fits any of its holders is not
+ * reported again as pointing at the wrong kind.
+ */
+type Owner = { kind: Kind; path: string; kinds: Set<Kind> };
 
 function collectIds(doc: Topology, issues: Issue[]): Map<string, Owner> {
   const owners = new Map<string, Owner>();
   const claim = (value: string, kind: Kind, path: string) => {
     const first = owners.get(value);
     if (first) {
+      first.kinds.add(kind);
       issues.push({
         path: `${path}.id`,
         message: `The id "${value}" is already used by the ${first.kind} at ${first.path}; every id must be unique in the document.`,
       });
       return;
     }
-    owners.set(value, { kind, path });
+    owners.set(value, { kind, path, kinds: new Set([kind]) });
   };
   doc.devices.forEach((device, d) => {
     claim(device.id, 'device', `devices.${d}`);
@@ -44,7 +50,7 @@ function checkCables(doc: Topology, owners: Map<string, Owner>, issues: Issue[])
       const target = owners.get(cable[end]);
       if (!target) {
         issues.push({ path: `cables.${i}.${end}`, message: `No port has the id "${cable[end]}".` });
-      } else if (target.kind !== 'port') {
+      } else if (!target.kinds.has('port')) {
         issues.push({
           path: `cables.${i}.${end}`,
           message: `"${cable[end]}" is a ${target.kind}, not a port; a cable end must name a port.`,
@@ -77,7 +83,7 @@ function checkPorts(doc: Topology, owners: Map<string, Owner>, issues: Issue[]):
     const target = owners.get(port.networkId);
     if (!target) {
       issues.push({ path: `${path}.networkId`, message: `No network has the id "${port.networkId}".` });
-    } else if (target.kind !== 'network') {
+    } else if (!target.kinds.has('network')) {
       issues.push({
         path: `${path}.networkId`,
         message: `"${port.networkId}" is a ${target.kind}, not a network.`,
@@ -88,7 +94,7 @@ function checkPorts(doc: Topology, owners: Map<string, Owner>, issues: Issue[]):
 
 function checkLayout(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
   for (const key of Object.keys(doc.layout ?? {})) {
-    if (owners.get(key)?.kind !== 'device') {
+    if (!owners.get(key)?.kinds.has('device')) {
       issues.push({ path: `layout.${key}`, message: `The layout names "${key}", which is not a device of this document.` });
     }
   }

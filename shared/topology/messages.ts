@@ -53,10 +53,38 @@ const TYPE_WORDS: Record<string, string> = {
 
 type ZodIssue = z.core.$ZodIssue;
 
+/** What one entry of a list is called, for a path that ends at an entry (`devices.3`). */
+const ENTRY_LABELS: Record<string, string> = {
+  devices: 'The device',
+  controllers: 'The controller',
+  adapters: 'The card',
+  ports: 'The port',
+  cables: 'The cable',
+  networks: 'The network',
+};
+
+/** Counted nouns for list lengths: "at least 1 controller". */
+const ENTRY_NOUNS: Record<string, [string, string]> = {
+  controllers: ['controller', 'controllers'],
+};
+
 function fieldLabel(path: PropertyKey[]): string {
-  const last = [...path].reverse().find((key) => typeof key === 'string');
-  if (typeof last !== 'string') return 'The document';
-  return FIELD_LABELS[last] ?? `The field "${last}"`;
+  const last = path[path.length - 1];
+  if (path.length === 2 && path[0] === 'layout') return `The position of "${String(last)}"`;
+  if (typeof last === 'number') {
+    const list = path[path.length - 2];
+    if (typeof list === 'string' && ENTRY_LABELS[list]) return ENTRY_LABELS[list];
+  }
+  const key = [...path].reverse().find((k) => typeof k === 'string');
+  if (typeof key !== 'string') return 'The document';
+  return FIELD_LABELS[key] ?? `The field "${key}"`;
+}
+
+function countWords(path: PropertyKey[], count: unknown): string {
+  const key = path[path.length - 1];
+  const nouns = typeof key === 'string' ? ENTRY_NOUNS[key] : undefined;
+  const n = String(count);
+  return nouns ? `${n} ${count === 1 ? nouns[0] : nouns[1]}` : n;
 }
 
 function listWords(values: readonly unknown[]): string {
@@ -105,11 +133,11 @@ function sentence(issue: ZodIssue, input: unknown): string {
     }
     case 'too_small':
       if (issue.origin === 'string') return `${label} must not be empty.`;
-      if (issue.origin === 'array') return `${label} needs at least ${String(issue.minimum)}.`;
+      if (issue.origin === 'array') return `${label} needs at least ${countWords(issue.path, Number(issue.minimum))}.`;
       return `${label} must be ${issue.inclusive ? 'at least' : 'greater than'} ${String(issue.minimum)}.`;
     case 'too_big':
       if (issue.origin === 'string') return `${label} must be at most ${String(issue.maximum)} characters.`;
-      if (issue.origin === 'array') return `${label} can hold at most ${String(issue.maximum)}.`;
+      if (issue.origin === 'array') return `${label} can hold at most ${countWords(issue.path, Number(issue.maximum))}.`;
       return `${label} must be at most ${String(issue.maximum)}.`;
     case 'custom':
       return `${label} ${issue.message}.`;

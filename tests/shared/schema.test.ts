@@ -116,16 +116,60 @@ describe('validateTopology rejects what makes a document unreadable, with paths'
     if (crowded.devices[0].kind === 'array') {
       crowded.devices[0].controllers = Array.from({ length: 5 }, (_, i) => ({ id: `x${i}`, name: `x${i}`, ports: [] }));
     }
-    expect(issuesOf(crowded)).toEqual([{ path: 'devices.0.controllers', message: 'The controller list can hold at most 4.' }]);
+    expect(issuesOf(crowded)).toEqual([{ path: 'devices.0.controllers', message: 'The controller list can hold at most 4 controllers.' }]);
+    expect(issuesOf(doc)[0].message).toBe('The controller list needs at least 1 controller.');
+  });
+
+  it('names a list entry that is not an object by what it should be', () => {
+    const doc = base() as unknown as Record<string, any>;
+    doc.devices[1] = 'fa';
+    doc.cables[0] = 7;
+    doc.layout = { v: 3 };
+    expect(issuesOf(doc)).toEqual([
+      { path: 'devices.1', message: 'The device must be an object.' },
+      { path: 'cables.0', message: 'The cable must be an object.' },
+      { path: 'layout.v', message: 'The position of "v" must be an object.' },
+    ]);
+  });
+
+  it('keeps one id space for devices, controllers, cards, ports, cables and networks', () => {
+    const kinds = {
+      device: (d: Topology) => d.devices[1],
+      controller: (d: Topology) => (d.devices[0].kind === 'array' ? d.devices[0].controllers[1] : undefined)!,
+      card: (d: Topology) => (d.devices[2].kind === 'host' ? d.devices[2].adapters[1] : undefined)!,
+      port: (d: Topology) => (d.devices[1].kind === 'switch' ? d.devices[1].ports[11] : undefined)!,
+      cable: (d: Topology) => d.cables[3],
+      network: (d: Topology) => d.networks[0],
+    };
+    for (const [first, takeFirst] of Object.entries(kinds)) {
+      for (const [second, takeSecond] of Object.entries(kinds)) {
+        if (first === second) continue;
+        const doc = base();
+        takeSecond(doc).id = takeFirst(doc).id;
+        const issues = issuesOf(doc);
+        // Exactly one problem: the second holder's id; references to it are not blamed as well.
+        expect({ first, second, issues: issues.filter((i) => i.message.includes('already used')).length }).toEqual({ first, second, issues: 1 });
+      }
+    }
+  });
+
+  it('blames only the duplicate when a port and a network share an id', () => {
+    const doc = base();
+    doc.networks[0].id = 'v.a.1'; // the id of a controller port; the controller port still points at "na"
+    if (doc.devices[0].kind === 'array') doc.devices[0].controllers[0].ports[0].networkId = 'v.a.1';
+    expect(issuesOf(doc).map((i) => i.path)).toEqual(['networks.0.id']);
   });
 });
 
 describe('validateTopology leaves drafting mistakes to the analysis', () => {
-  it('accepts VLAN and MTU out of range, a port cabled twice, an address outside its network and a bad initiator name', () => {
+  it('accepts VLAN and MTU out of range, a port cabled twice, an address outside its network, a bad initiator name, a cable too long or of the wrong media and a subnet with host bits set', () => {
     const doc = base();
     doc.networks[0].vlan = 5000; // outside IEEE 802.1Q 1–4094: a finding, not unreadable
     doc.networks[0].mtu = 20000;
     doc.cables.push({ id: 'k-extra', a: 'h1.c1.1', b: 'fa.9', media: 'cat6a' });
+    doc.cables[0].lengthM = 500; // far past 10GBASE-T's 100 m (IEEE 802.3an): cable-too-long, a finding
+    doc.cables[1].media = 'om4'; // fibre on RJ45 ports: connector-mismatch, a finding
+    doc.networks.push({ id: 'nb', name: 'nb', purpose: 'management', cidr: '203.0.113.7/24' }); // host bits set: a finding
     if (doc.devices[2].kind === 'host') {
       doc.devices[2].iqn = 'iqn.2026-13.example_bad';
       doc.devices[2].adapters[0].ports[0].networkId = 'na';
