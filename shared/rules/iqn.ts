@@ -5,30 +5,62 @@ import { LIMITS } from '@/shared/rules/limits';
  *   iqn.YYYY-MM.reversed.domain[:unique]   (§4.2.7.4)
  *   eui.<16 hex digits>                    (§4.2.7.5)
  *   naa.<16 or 32 hex digits>              (§4.2.7.6; RFC 3980 §4.1)
- * Names compare after case folding (RFC 3722 stringprep; the RFCs' own examples use uppercase hex),
- * are at most 223 bytes of UTF-8, and use only `-`, `.` and `:` as punctuation.
+ * A name is prepared by the iSCSI stringprep profile (RFC 3722) before it is compared or checked:
+ * code points of stringprep table B.1 map to nothing, case folds to lowercase (the RFCs' own examples
+ * use uppercase hex), then NFKC. The prepared name is at most 223 bytes of UTF-8 and has no
+ * prohibited output (RFC 3722 §6): of ASCII only letters, digits, "-", "." and ":"; no spaces,
+ * control or format characters, private-use, unassigned or non-character code points, and not the
+ * ideographic full stop. Not checked: stringprep's bidirectional-text rule (RFC 3454 §6).
+ * The naming authority of an iqn name is a reversed DNS domain, so its labels are ASCII
+ * letters, digits and inner hyphens.
  */
 export type IscsiNameCheck = { ok: true; form: 'iqn' | 'eui' | 'naa'; folded: string } | { ok: false; reason: string };
 
-/** Case folding and compatibility normalisation: the parts of the iSCSI stringprep profile that matter here. */
+/** Stringprep table B.1: soft hyphen, joiners, variation selectors and the like map to nothing. */
+const MAPPED_TO_NOTHING = /[\u00AD\u034F\u1806\u180B-\u180D\u200B-\u200D\u2060\uFE00-\uFE0F\uFEFF]/gu;
+
+/**
+ * The name as RFC 3722 prepares it. toLowerCase stands in for table B.2's case folding, with the
+ * one full fold it leaves out that a name might hold (ß → ss).
+ */
 export function foldIscsiName(name: string): string {
-  return name.normalize('NFKC').toLowerCase();
+  return name.replace(MAPPED_TO_NOTHING, '').toLowerCase().replace(/ß/g, 'ss').normalize('NFKC').toLowerCase();
 }
 
-const LABEL = '[a-z0-9](?:[a-z0-9-]*[a-z0-9])?';
-const IQN = new RegExp(`^iqn\\.(\\d{4})-(\\d{2})\\.(${LABEL}(?:\\.${LABEL})*)(?::(.*))?$`, 'u');
-// After folding: lowercase letters of any script, digits, and the three separators.
-const UNIQUE_PART = /^[\p{Ll}\p{Lo}\p{Nd}.:-]+$/u;
+const ASCII_ALLOWED = /[a-z0-9.:-]/;
+// RFC 3722 §6 via stringprep tables C.1.2–C.9, by Unicode category where the tables follow one.
+const PROHIBITED = /[\p{Z}\p{Cc}\p{Cf}\p{Co}\p{Cs}\p{Cn}\uFFFC\uFFFD\u2FF0-\u2FFB\u3002\uFDD0-\uFDEF]/u;
+
+function describeCharacter(ch: string): string {
+  if (ch === ' ') return 'a space';
+  const code = ch.codePointAt(0)!;
+  if (code < 0x20 || code === 0x7f || PROHIBITED.test(ch)) return `the character U+${code.toString(16).toUpperCase().padStart(4, '0')}`;
+  return `"${ch}"`;
+}
+
+/** The first character the prepared name may not hold, or null. */
+function prohibitedCharacter(folded: string): string | null {
+  for (const ch of folded) {
+    const ascii = ch.charCodeAt(0) < 0x80;
+    if (ascii ? !ASCII_ALLOWED.test(ch) : PROHIBITED.test(ch)) return ch;
+  }
+  return null;
+}
+
+const IQN = /^iqn\.(\d{4})-(\d{2})\.([^:]*)(?::(.*))?$/su;
+const DOMAIN_LABEL = /^[a-z0-9](?:[a-z0-9-]*[a-z0-9])?$/;
 
 function checkIqn(folded: string): string | null {
+  if (/^iqn\.\d{4}-\d{2}\.?$/.test(folded)) return 'the naming authority, a reversed domain such as com.example, is missing after the date';
   const match = IQN.exec(folded);
-  if (!match) return 'an iqn name is iqn.YYYY-MM.reversed.domain, optionally followed by ":" and a unique part';
+  if (!match) return 'an iqn name starts iqn.YYYY-MM. with the year and month its naming authority held the domain';
   const month = Number(match[2]);
   if (month < 1 || month > 12) return `the month "${match[2]}" is not 01–12`;
-  const unique = match[4];
-  if (unique !== undefined && !UNIQUE_PART.test(unique)) {
-    return 'the part after ":" may use only letters, digits, "-", "." and ":"';
+  const authority = match[3];
+  if (authority === '' || !authority.split('.').every((label) => DOMAIN_LABEL.test(label))) {
+    return `the naming authority "${authority}" is not a reversed domain name such as com.example`;
   }
+  if (match[4] === '') return 'nothing follows the ":"; leave it out or add the unique part';
   return null;
 }
 
@@ -39,21 +71,26 @@ export function checkIscsiName(name: string): IscsiNameCheck {
   if (bytes > LIMITS.iscsiNameMaxBytes.value) {
     return { ok: false, reason: `it is ${bytes} bytes long; the limit is ${LIMITS.iscsiNameMaxBytes.value}` };
   }
-  if (folded.startsWith('iqn.')) {
+  const form = folded.slice(0, 4);
+  if (form !== 'iqn.' && form !== 'eui.' && form !== 'naa.') return { ok: false, reason: 'it must start with "iqn.", "eui." or "naa."' };
+  const bad = prohibitedCharacter(folded);
+  if (bad !== null) {
+    const punctuation = bad.charCodeAt(0) < 0x80 && bad !== ' ' && bad.charCodeAt(0) >= 0x20;
+    const hint = punctuation ? ' (of punctuation only "-", "." and ":")' : '';
+    return { ok: false, reason: `it contains ${describeCharacter(bad)}, which iSCSI names do not allow${hint}` };
+  }
+  if (form === 'iqn.') {
     const reason = checkIqn(folded);
     return reason ? { ok: false, reason } : { ok: true, form: 'iqn', folded };
   }
-  if (folded.startsWith('eui.')) {
+  if (form === 'eui.') {
     return /^eui\.[0-9a-f]{16}$/.test(folded)
       ? { ok: true, form: 'eui', folded }
       : { ok: false, reason: 'an eui name is "eui." and 16 hexadecimal digits' };
   }
-  if (folded.startsWith('naa.')) {
-    return /^naa\.(?:[0-9a-f]{16}|[0-9a-f]{32})$/.test(folded)
-      ? { ok: true, form: 'naa', folded }
-      : { ok: false, reason: 'a naa name is "naa." and 16 or 32 hexadecimal digits' };
-  }
-  return { ok: false, reason: 'it must start with "iqn.", "eui." or "naa."' };
+  return /^naa\.(?:[0-9a-f]{16}|[0-9a-f]{32})$/.test(folded)
+    ? { ok: true, form: 'naa', folded }
+    : { ok: false, reason: 'a naa name is "naa." and 16 or 32 hexadecimal digits' };
 }
 
 /** A well-formed initiator name for a host, e.g. iqn.2026-01.example.tidewater:wms-db-1. */

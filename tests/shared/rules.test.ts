@@ -174,6 +174,24 @@ describe('iSCSI names', () => {
     expect(LIMITS.iscsiNameMaxBytes.value).toBe(223); // RFC 7143 §4.2.7.1
   });
 
+  it('prepares names as the iSCSI stringprep profile does before checking them', () => {
+    expect(checkIscsiName('IQN.2001-04.COM.EXAMPLE:STORAGE')).toMatchObject({ ok: true, folded: 'iqn.2001-04.com.example:storage' }); // RFC 3722 §4: case folding
+    expect(checkIscsiName('iqn.2001-04.com.example:disk\u00ad1')).toMatchObject({ ok: true, folded: 'iqn.2001-04.com.example:disk1' }); // RFC 3722 §3, stringprep B.1: soft hyphen maps to nothing
+    expect(checkIscsiName('iqn.2001-04.com.example:\u2163')).toMatchObject({ ok: true, folded: 'iqn.2001-04.com.example:iv' }); // RFC 3722 §5: NFKC
+    expect(checkIscsiName('iqn.2001-04.com.example:café').ok).toBe(true); // RFC 3722 §6 prohibits punctuation, not letters of other scripts
+    expect(checkIscsiName('iqn.2001-04.com.example:नमस्ते').ok).toBe(true); // RFC 3722 §6: combining marks are not prohibited
+  });
+
+  it('rejects the prohibited output of RFC 3722 and says which character', () => {
+    expect(checkIscsiName('iqn.2001-04.com.example:a\u3002b')).toEqual({ ok: false, reason: expect.stringContaining('U+3002') }); // RFC 3722 §6: ideographic full stop
+    expect(checkIscsiName('iqn.2001-04.com.example:a\u0007b').ok).toBe(false); // RFC 3722 §6, stringprep C.2.1: control
+    expect(checkIscsiName('iqn.2001-04.com.example:a\u200eb').ok).toBe(false); // RFC 3722 §6, stringprep C.8: left-to-right mark
+    expect(checkIscsiName('iqn.2001-04.com.example:a\ue000b').ok).toBe(false); // RFC 3722 §6, stringprep C.3: private use
+    expect(checkIscsiName('iqn.2001-04.com.example:storage_disk')).toEqual({ ok: false, reason: expect.stringContaining('"_"') }); // RFC 3722 §6: 0x5F
+    expect(checkIscsiName('iqn.2001-04.com.example:')).toEqual({ ok: false, reason: expect.stringContaining('nothing follows the ":"') }); // RFC 7143 §4.2.7.4
+    expect(checkIscsiName('iqn.2001-04')).toEqual({ ok: false, reason: expect.stringContaining('naming authority') }); // RFC 7143 §4.2.7.4
+  });
+
   it('reports invalid and duplicate initiator names, comparing after case folding', () => {
     expect(findings('iqn-invalid', (doc) => doc.devices[3].kind === 'host' && (doc.devices[3].iqn = 'iqn.2026-00.example.tidewater'))).toHaveLength(1);
     const dup = findings('iqn-duplicate', (doc, d) => {
