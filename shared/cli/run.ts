@@ -17,18 +17,39 @@ export type CliIo = {
 
 export const USAGE = 'usage: npm run analyze -- design.json [more.json …] [--failed=unit-id,unit-id]';
 
-function load(io: CliIo, file: string): { doc: unknown } | { errors: Issue[] } {
+/** Why a file could not be read, as a person says it. */
+const READ_ERRORS: Record<string, string> = {
+  ENOENT: 'there is no such file',
+  EISDIR: 'it is a folder',
+  EACCES: 'permission was denied',
+  EPERM: 'permission was denied',
+};
+
+type Loaded = { doc: unknown } | { errors: Issue[]; sentence: string };
+
+function load(io: CliIo, file: string): Loaded {
   let text: string;
   try {
     text = io.readFile(file);
   } catch (error) {
-    return { errors: [{ path: '', message: `The file could not be read (${(error as NodeJS.ErrnoException).code ?? 'error'}).` }] };
+    const code = (error as NodeJS.ErrnoException).code ?? 'error';
+    const why = READ_ERRORS[code] ?? code;
+    return { errors: [{ path: '', message: `The file could not be read (${why}).` }], sentence: `${file} could not be read: ${why}.` };
   }
   try {
-    return { doc: JSON.parse(text) as unknown };
+    // A byte-order mark is how some editors begin a UTF-8 file; it is not part of the JSON.
+    return { doc: JSON.parse(text.replace(/^\uFEFF/, '')) as unknown };
   } catch (error) {
-    return { errors: [{ path: '', message: `The file is not JSON (${(error as Error).message}).` }] };
+    const why = (error as Error).message;
+    return { errors: [{ path: '', message: `The file is not JSON (${why}).` }], sentence: `${file} is not JSON: ${why}.` };
   }
+}
+
+function invalidSentence(file: string, issues: Issue[]): string {
+  const first = issues[0];
+  const count = issues.length;
+  const where = first.path ? ` at ${first.path}` : '';
+  return `${file} is not a valid topology document (${count} problem${count === 1 ? '' : 's'}); the first${where}: ${first.message}`;
 }
 
 export function runAnalyzeCli(args: readonly string[], io: CliIo): number {
@@ -42,13 +63,17 @@ export function runAnalyzeCli(args: readonly string[], io: CliIo): number {
   let invalid = 0;
   for (const file of files) {
     const loaded = load(io, file);
-    const checked = 'doc' in loaded ? validateTopology(loaded.doc) : ({ ok: false, issues: loaded.errors } as const);
+    if (!('doc' in loaded)) {
+      invalid += 1;
+      io.out(JSON.stringify({ file, errors: loaded.errors }));
+      io.err(loaded.sentence);
+      continue;
+    }
+    const checked = validateTopology(loaded.doc);
     if (!checked.ok) {
       invalid += 1;
       io.out(JSON.stringify({ file, errors: checked.issues }));
-      const first = checked.issues[0];
-      const count = checked.issues.length;
-      io.err(`${file} is not a valid topology document: ${count} problem${count === 1 ? '' : 's'}, first ${first.path ? `at ${first.path}: ` : ''}${first.message}`);
+      io.err(invalidSentence(file, checked.issues));
       continue;
     }
     const report = analyze(checked.doc, { failed });

@@ -45,8 +45,17 @@ describe('the analyze command', () => {
     expect(JSON.parse(result.out[1])).toEqual(analyze(harborRoadV2()));
     expect(JSON.parse(result.out[2]).errors[0].message).toContain('could not be read');
     expect(JSON.parse(result.out[3]).errors[0].message).toContain('not JSON');
-    expect(result.err).toHaveLength(3);
-    expect(result.err[0]).toBe('bad.json is not a valid topology document: 1 problem, first at cables.0.a: No port has the id "nowhere".');
+    expect(result.err).toEqual([
+      'bad.json is not a valid topology document (1 problem); the first at cables.0.a: No port has the id "nowhere".',
+      'missing.json could not be read: there is no such file.',
+      expect.stringMatching(/^junk\.json is not JSON: .+\.$/),
+    ]);
+  });
+
+  it('reads a file that begins with a UTF-8 byte-order mark', () => {
+    const result = run(['v2.json'], { 'v2.json': `\uFEFF${v2}` });
+    expect(result.code).toBe(0);
+    expect(JSON.parse(result.out.join('\n'))).toEqual(analyze(harborRoadV2()));
   });
 
   it('analyses what-if failures given with --failed', () => {
@@ -67,5 +76,15 @@ describe('the analyze command', () => {
     expect(result.status).toBe(0);
     const report = JSON.parse(result.stdout);
     expect(report.failures.map((f: { unit: string }) => f.unit)).toEqual(expect.arrayContaining(['fab-a', 'cam-rec-2.card-1']));
+  }, 30000);
+
+  it('runs several files as one process: JSON Lines on stdout, sentences on stderr, exit 2 at the end', () => {
+    const root = join(__dirname, '..', '..');
+    const files = ['shared/fixtures/harbor-road-v2.json', 'shared/fixtures/no-such-design.json', 'shared/fixtures/harbor-road-v1.json'];
+    const result = spawnSync(process.execPath, [require.resolve('tsx/cli'), 'shared/cli/analyze.ts', ...files], { cwd: root, encoding: 'utf8' });
+    expect(result.status).toBe(2);
+    const lines = result.stdout.trimEnd().split('\n').map((line) => JSON.parse(line));
+    expect(lines).toEqual([analyze(harborRoadV2()), { file: files[1], errors: [{ path: '', message: 'The file could not be read (there is no such file).' }] }, analyze(harborRoadV1())]);
+    expect(result.stderr.trimEnd().split('\n')).toEqual(['shared/fixtures/no-such-design.json could not be read: there is no such file.']);
   }, 30000);
 });
