@@ -25,7 +25,7 @@ describe('address math on published values', () => {
   it('finds the network and broadcast address of a block', () => {
     expect(networkAddress('203.0.113.77/24')).toBe('203.0.113.0'); // RFC 5737 §3 range, RFC 4632 masking
     expect(broadcastAddress('203.0.113.77/24')).toBe('203.0.113.255'); // RFC 919 §7 all-ones host part
-    expect(broadcastAddress('192.0.2.64/26')).toBe('192.0.2.127');
+    expect(broadcastAddress('192.0.2.64/26')).toBe('192.0.2.127'); // RFC 4632: a /26 spans 64 addresses; RFC 919 §7
     expect(broadcastAddress('2001:db8::/64')).toBeNull(); // RFC 4291 §2: IPv6 has no broadcast
   });
 
@@ -50,8 +50,8 @@ describe('address math on published values', () => {
   it('reads only dotted-quad IPv4 and plain IPv6', () => {
     expect(parseIp('1.2.3')).toBeNull(); // ipaddr.js would accept the classful short form; a port address never uses it
     expect(parseIp('0xc0.0.2.1')).toBeNull();
-    expect(parseIp('fe80::1%eth0')).toBeNull();
-    expect(parseIp('198.51.100.256')).toBeNull();
+    expect(parseIp('fe80::1%eth0')).toBeNull(); // RFC 4007 §11: a zone index names one machine's interface
+    expect(parseIp('198.51.100.256')).toBeNull(); // RFC 791 §3.2: each part of a dotted quad is one octet
     expect(parseIp('198.051.100.1')).toBeNull(); // a leading zero reads as octal in some tools (from memory: inet_aton)
     expect(normalizeIp('2001:DB8:0:0:0:0:0:21')).toBe('2001:db8::21'); // RFC 5952 §4 canonical text
   });

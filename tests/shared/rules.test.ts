@@ -40,19 +40,19 @@ describe('cable reach against the published values', () => {
     expect(lengthOnCable('cat6', 55)).toEqual([]); // IEEE 802.3an: 55 m on Cat 6
     expect(lengthOnCable('cat6', 56)).toHaveLength(1);
     expect(lengthOnCable('cat6a', 100)).toEqual([]); // IEEE 802.3an: 100 m on Cat 6A
-    expect(lengthOnCable('cat6a', 101)).toHaveLength(1);
+    expect(lengthOnCable('cat6a', 101)).toHaveLength(1); // IEEE 802.3an: past 100 m
   });
 
   it('allows 1000BASE-T over 100 m of Category 5e and no more', () => {
     expect(lengthOnCable('cat5e', 100, 1)).toEqual([]); // IEEE 802.3 clause 40 (from memory)
-    expect(lengthOnCable('cat5e', 100.5, 1)).toHaveLength(1);
+    expect(lengthOnCable('cat5e', 100.5, 1)).toHaveLength(1); // IEEE 802.3 clause 40: past 100 m (from memory)
   });
 
   it('flags 10GBASE-SR past 300 m of OM3 and 400 m of OM4', () => {
     expect(lengthOnCable('om3', 300)).toEqual([]); // IEEE 802.3ae
-    expect(lengthOnCable('om3', 301)).toHaveLength(1);
+    expect(lengthOnCable('om3', 301)).toHaveLength(1); // IEEE 802.3ae: past 300 m
     expect(lengthOnCable('om4', 400)).toEqual([]); // IEEE 802.3ae / 802.3-2012
-    expect(lengthOnCable('om4', 401)).toHaveLength(1);
+    expect(lengthOnCable('om4', 401)).toHaveLength(1); // IEEE 802.3ae / 802.3-2012: past 400 m
   });
 
   it('reports media that cannot carry the link speed at all', () => {
@@ -193,7 +193,7 @@ describe('iSCSI names', () => {
   });
 
   it('reports invalid and duplicate initiator names, comparing after case folding', () => {
-    expect(findings('iqn-invalid', (doc) => doc.devices[3].kind === 'host' && (doc.devices[3].iqn = 'iqn.2026-00.example.tidewater'))).toHaveLength(1);
+    expect(findings('iqn-invalid', (doc) => doc.devices[3].kind === 'host' && (doc.devices[3].iqn = 'iqn.2026-00.example.tidewater'))).toHaveLength(1); // RFC 7143 §4.2.7.4: month 01–12
     const dup = findings('iqn-duplicate', (doc, d) => {
       d.host('h2', { c1: 1 }, { iqn: 'IQN.2026-01.EXAMPLE.TIDEWATER:H1' }); // RFC 3722 §4: names fold to lowercase
       if (doc.devices[3].kind === 'host') doc.devices[3].iqn = 'iqn.2026-01.example.tidewater:h1';

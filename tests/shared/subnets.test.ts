@@ -26,12 +26,12 @@ describe('a subnet written with host bits set', () => {
       },
     ]);
     // Read as 198.51.100.0/24 (RFC 4632 masking): an address of that block is inside it.
-    expect(findings('address-outside-network', { cidr: '198.51.100.7/24' }, '198.51.100.21')).toEqual([]);
+    expect(findings('address-outside-network', { cidr: '198.51.100.7/24' }, '198.51.100.21')).toEqual([]); // inside 198.51.100.0/24 (RFC 4632)
     expect(findings('address-reserved', { cidr: '198.51.100.7/24' }, '198.51.100.0')).toHaveLength(1); // its network address
   });
 
   it('says nothing about a subnet written with its network address', () => {
-    expect(findings('cidr-host-bits', { cidr: '198.51.100.0/24' })).toEqual([]);
+    expect(findings('cidr-host-bits', { cidr: '198.51.100.0/24' })).toEqual([]); // RFC 5737 §3, written as its network address
     expect(findings('cidr-host-bits', { cidr: '2001:db8:10::/64' })).toEqual([]); // RFC 3849
   });
 
@@ -63,7 +63,7 @@ describe('gateways', () => {
     expect(findings('address-reserved', { gateway: '198.51.100.255' })[0].message).toBe(
       'The gateway 198.51.100.255 of na is the network or broadcast address of 198.51.100.0/24.', // RFC 919 §7 broadcast
     );
-    expect(findings('address-reserved', { gateway: '198.51.100.1' })).toEqual([]);
+    expect(findings('address-reserved', { gateway: '198.51.100.1' })).toEqual([]); // first host address of a /24 (RFC 4632)
   });
 
   it('flags a gateway outside its network', () => {

@@ -154,7 +154,7 @@ export const twoArrays = () =>
     .link('h1.c2.1', 'fb')
     .build();
 
-/** h1 =m= fa (data)  ;  v.a.mgmt == fa (data) ; h1.c1.1 (data) == oob (management) ; oob -k4- fa */
+/** v.a.2 (management) =k1= fa (data) ; h1.c1.1 (data) =k2= oob (management) ; oob -k3- fa ; h1.onboard.1 (management) =k4= fa */
 export const managementDataMixing = () =>
   new Draft()
     .array('v', { a: [{}, { role: 'management', speedGbps: 1 }], b: 1 })
