@@ -2,9 +2,11 @@ import type { Cable, Device, Network, Port, Topology } from '@/shared/topology/s
 
 /**
  * Seeded random designs for the oracle comparison: small enough for the brute-force method,
- * varied enough to hit every corner of the data-path rules — switches of all three roles,
- * inter-switch links and loops, direct attach, management ports, ports with and without networks,
- * documents without networks, ports cabled twice, and cables that go nowhere useful.
+ * varied enough to hit every corner of the data-path rules — arrays of one to four controllers,
+ * switches of all three roles, inter-switch links and loops, direct attach, management ports,
+ * ports with and without networks, data ports on management networks, documents without networks,
+ * static and DHCP addresses, ports cabled twice, and cables that go nowhere useful. The oracle test
+ * counts how often each of these turns up, so a change here cannot quietly thin them out.
  */
 export function mulberry32(seed: number): () => number {
   let a = seed >>> 0;
@@ -24,9 +26,17 @@ export function randomDesign(seed: number): Topology {
   const networks: Network[] = [];
   const networkCount = pick([0, 1, 2, 2, 3]);
   for (let n = 0; n < networkCount; n += 1) {
-    networks.push({ id: `n${n}`, name: `net ${n}`, purpose: 'data', cidr: `198.51.${100 + n}.0/24` });
+    // Now and then a management network, which data ports may land on by mistake: pairing goes by
+    // networkId alone, whatever the network's purpose.
+    const purpose = n > 0 && rnd() < 0.3 ? 'management' : 'data';
+    networks.push({ id: `n${n}`, name: `net ${n}`, purpose, cidr: `198.51.${100 + n}.0/24` });
   }
   const noNetwork = rnd() < 0.25;
+  const address = (): Pick<Port, 'address'> => {
+    const r = rnd();
+    if (r < 0.2) return { address: { mode: 'dhcp' } };
+    return r < 0.6 ? { address: { mode: 'static', ip: `198.51.100.${1 + Math.floor(rnd() * 250)}` } } : {};
+  };
   const port = (id: string, forSwitch = false): Port => ({
     id,
     name: id,
@@ -34,13 +44,14 @@ export function randomDesign(seed: number): Topology {
     speedGbps: 10,
     connector: 'rj45',
     ...(!forSwitch && networks.length > 0 && !(noNetwork && rnd() < 0.5) ? { networkId: pick(networks).id } : {}),
+    ...(forSwitch ? {} : address()),
   });
   const devices: Device[] = [];
   const hostPorts: string[] = [];
   const controllerPorts: string[] = [];
   const switchPorts: string[] = [];
   for (let a = 0; a < int(1, 2); a += 1) {
-    const controllers = Array.from({ length: int(1, 3) }, (_, c) => ({
+    const controllers = Array.from({ length: int(1, 4) }, (_, c) => ({
       id: `a${a}c${c}`,
       name: `ctl ${c}`,
       ports: Array.from({ length: int(1, 3) }, (_, p) => port(`a${a}c${c}p${p}`)),
