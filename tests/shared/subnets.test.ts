@@ -61,7 +61,7 @@ describe('gateways', () => {
   it('flags a gateway on the network or broadcast address', () => {
     expect(findings('address-reserved', { gateway: '198.51.100.0' })[0]).toMatchObject({ subjects: ['na'] }); // network address, RFC 4632
     expect(findings('address-reserved', { gateway: '198.51.100.255' })[0].message).toBe(
-      'The gateway 198.51.100.255 of na is the network or broadcast address of 198.51.100.0/24.', // RFC 919 §7 broadcast
+      'The gateway 198.51.100.255 of na is the broadcast address of 198.51.100.0/24.', // RFC 919 §7 broadcast
     );
     expect(findings('address-reserved', { gateway: '198.51.100.1' })).toEqual([]); // first host address of a /24 (RFC 4632)
   });

@@ -1,5 +1,5 @@
 import { containsIp, isReservedInBlock, parseCidr, type Cidr } from '@/shared/address/cidr';
-import { ipKey } from '@/shared/address/ip';
+import { ipKey, type Ip } from '@/shared/address/ip';
 import { ipOf, nameOf, type AnalysisContext } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
 import { displayName, portLabel, type PortRef } from '@/shared/topology/index';
@@ -17,8 +17,10 @@ function blocks(ctx: AnalysisContext): Map<string, Cidr> {
   return map;
 }
 
-function reservedWord(ip: { family: string }): string {
-  return ip.family === 'ipv4' ? 'the network or broadcast address' : 'the subnet-router anycast address';
+/** Which reserved address of the block this is (the caller knows it is one). */
+function reservedWord(block: Cidr, ip: Ip): string {
+  if (ip.family === 'ipv6') return 'the subnet-router anycast address';
+  return ip.value === block.network ? 'the network address' : 'the broadcast address';
 }
 
 function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>): Finding[] {
@@ -55,7 +57,7 @@ function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs
       message: `${label} has ${port.address.ip}, which is outside ${displayName(network)} (${network.cidr}).`,
     });
   } else if (isReservedInBlock(block, ip)) {
-    const what = reservedWord(ip);
+    const what = reservedWord(block, ip);
     out.push({
       rule: 'address-reserved',
       severity: 'error',
@@ -84,7 +86,7 @@ function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Findin
         rule: 'address-reserved',
         severity: 'error',
         subjects: [network.id],
-        message: `The gateway ${network.gateway} of ${displayName(network)} is ${reservedWord(gateway)} of ${network.cidr}.`,
+        message: `The gateway ${network.gateway} of ${displayName(network)} is ${reservedWord(block, gateway)} of ${network.cidr}.`,
       });
     }
   }

@@ -50,7 +50,7 @@ function physicalFindings(ctx: AnalysisContext, cable: Cable, a: PortRef, b: Por
       rule: 'media-unsuited',
       severity: 'error',
       subjects: [cable.id],
-      message: `${name} is ${media}, which cannot carry ${speed} Gb/s (it carries ${speedsFor(cable.media).join(', ')} Gb/s).`,
+      message: `${name} is ${media}, which cannot carry ${speed} Gb/s (it carries ${orList(speedsFor(cable.media))} Gb/s).`,
     });
   } else if (cable.lengthM !== undefined && cable.lengthM > reach.maxM) {
     out.push({
@@ -63,6 +63,10 @@ function physicalFindings(ctx: AnalysisContext, cable: Cable, a: PortRef, b: Por
   if (cable.lengthM === undefined) {
     out.push({ rule: 'cable-unmeasured', severity: 'info', subjects: [cable.id], message: `${name} has no length yet.` });
   }
+}
+
+function orList(values: number[]): string {
+  return values.length < 2 ? values.join('') : `${values.slice(0, -1).join(', ')} or ${values[values.length - 1]}`;
 }
 
 const ENDPOINT_WORDS = { host: 'hosts', array: 'controllers' } as const;
@@ -97,7 +101,7 @@ export function cablingFindings(ctx: AnalysisContext): Finding[] {
       rule: 'port-double-cabled',
       severity: 'error',
       subjects: [portId, ...cables.map((c) => c.id)],
-      message: `${portLabel(ref)} is cabled ${cables.length} times (${cables.map((c) => describeUnit(ctx, c.id)).join(', ')}); a port takes one cable.`,
+      message: `${portLabel(ref)} is cabled ${cables.length === 2 ? 'twice' : `${cables.length} times`} (${cables.map((c) => describeUnit(ctx, c.id)).join(', ')}); a port takes one cable.`,
     });
   }
   for (const cable of ctx.doc.cables) {

@@ -1,0 +1,117 @@
+import { analyze } from '@/shared/analysis/analyze';
+import { RULES } from '@/shared/analysis/rules';
+import type { Finding } from '@/shared/analysis/types';
+import { harborRoadV1, harborRoadV2 } from '@/shared/fixtures/harbor-road';
+import type { Topology } from '@/shared/topology/schema';
+import { validateTopology } from '@/shared/topology/validate';
+import { Draft } from './helpers/draft';
+import { randomDesign } from './helpers/random-design';
+import * as T from './helpers/topologies';
+
+/** The rule ids resilience-analysis.md requires, with the severities it fixes, copied from the page. */
+const REQUIRED = [
+  'single-point-of-failure', 'host-unreachable', 'one-controller-only',
+  'management-port-on-data-switch', 'data-port-on-management-switch', 'management-data-bridge', 'shared-switch-in-use',
+  'network-overlap', 'management-data-same-subnet', 'address-outside-network', 'address-duplicate', 'address-reserved',
+  'vlan-out-of-range', 'mtu-mismatch', 'port-unaddressed',
+  'port-double-cabled', 'connector-mismatch', 'speed-mismatch', 'media-unsuited', 'cable-too-long', 'cable-unmeasured',
+  'iqn-invalid', 'iqn-duplicate', 'chap-off',
+];
+const SEVERITY_IN_SPEC = { 'shared-switch-in-use': 'warning', 'cable-unmeasured': 'info', 'chap-off': 'warning' };
+
+/**
+ * One design holding one of every mistake:
+ *   h1 ==c1== fa == v.a (na) ; fa -k- oob (management) ; fa == h1.onboard (management port) ;
+ *   h2 (data ports, uncabled) ; h3 ==c1 (nc)== sh (shared) == v.b (na) ; h4.c1.1 == h5.c1.1 ; v.b.2 (mgmt) == h3.c2.1 …
+ */
+function everyMistake(): Topology {
+  const d = new Draft()
+    .network('na', '198.51.100.0/24', { vlan: 4095, mtu: 9000 }) // IEEE 802.1Q: 4095 reserved
+    .network('nb', '198.51.100.128/25') // RFC 4632: inside na
+    .network('nm', '198.51.100.0/26', { purpose: 'management' })
+    .network('nc', '203.0.113.0/24', { mtu: 100 }) // below RFC 791's 576
+    .network('nd', '192.0.2.7/24') // host bits set
+    .network('ne', '169.254.10.0/24') // RFC 3927 link-local
+    .array('v', { a: [{ networkId: 'na' }, { networkId: 'na' }], b: [{ networkId: 'na' }, { role: 'management', speedGbps: 1 }] })
+    .switch('fa')
+    .switch('oob', 'management')
+    .switch('sh', 'shared')
+    .host('h1', { c1: [{ networkId: 'na' }], onboard: [{ role: 'management', speedGbps: 1 }] }, { iqn: 'iqn.2026-13.example.tidewater' })
+    .host('h2', { c1: 1 }, { iqn: 'iqn.2026-01.example.tidewater:same' })
+    .host('h3', { c1: [{ networkId: 'nc' }], c2: [{}] }, { iqn: 'IQN.2026-01.EXAMPLE.TIDEWATER:SAME' })
+    .host('h4', { c1: 1 })
+    .host('h5', { c1: 1 })
+    .link('v.a.1', 'fa')
+    .link('h1.c1.1', 'fa')
+    .link('fa', 'oob')
+    .link('h1.onboard.1', 'fa')
+    .link('v.b.1', 'sh')
+    .link('h3.c1.1', 'sh')
+    .link('h3.c1.1', 'oob') // cabled twice, and a data port on a management switch
+    .link('h4.c1.1', 'h5.c1.1')
+    .link('v.b.2', 'h3.c2.1')
+    .link('v.a.2', 'fa');
+  d.port('v.a.1').address = { mode: 'static', ip: '203.0.113.9' }; // outside na
+  d.port('h1.c1.1').address = { mode: 'static', ip: '198.51.100.255' }; // na's broadcast address
+  d.port('v.a.2').address = { mode: 'static', ip: '203.0.113.9' }; // same as v.a.1
+  d.port('v.a.2').connector = 'sfp'; // RJ45 switch port on the other end
+  d.port('h3.c1.1').speedGbps = 25;
+  d.media('k1', 'cat5e'); // 10GBASE-T needs Category 6 or better (IEEE 802.3an)
+  d.media('k2', 'cat6', 80); // past 55 m (IEEE 802.3an)
+  d.media('k5', 'cat6a'); // no length
+  d.port('h3.c1.1').address = { mode: 'dhcp' };
+  return d.build();
+}
+
+function everyFinding(): { doc: Topology; finding: Finding }[] {
+  const docs = [everyMistake(), harborRoadV1(), harborRoadV2(), ...Object.values(T).map((make) => {
+    const made = make();
+    return 'build' in made ? made.build() : made;
+  })];
+  for (let seed = 1; seed <= 200; seed += 1) docs.push(randomDesign(seed));
+  return docs.flatMap((doc) => analyze(doc).findings.map((finding) => ({ doc, finding })));
+}
+
+function idsOf(doc: Topology): Set<string> {
+  const ids = new Set<string>([...doc.cables.map((c) => c.id), ...doc.networks.map((n) => n.id)]);
+  for (const d of doc.devices) {
+    ids.add(d.id);
+    const groups = d.kind === 'array' ? d.controllers : d.kind === 'host' ? d.adapters : [d];
+    for (const g of groups) {
+      ids.add(g.id);
+      for (const p of g.ports) ids.add(p.id);
+    }
+  }
+  return ids;
+}
+
+describe('the rule catalogue', () => {
+  it('holds every rule id resilience-analysis.md requires, with the severities it names', () => {
+    expect(REQUIRED.filter((rule) => !(rule in RULES))).toEqual([]);
+    for (const [rule, severity] of Object.entries(SEVERITY_IN_SPEC)) expect({ rule, severity: RULES[rule as keyof typeof RULES] }).toEqual({ rule, severity });
+  });
+
+  it('fires every rule it lists on a design that holds one of every mistake', () => {
+    const doc = everyMistake();
+    expect(validateTopology(doc)).toMatchObject({ ok: true }); // every one of them is a drafting mistake, not an unreadable document
+    const fired = new Set(analyze(doc).findings.map((f) => f.rule));
+    expect(Object.keys(RULES).filter((rule) => !fired.has(rule))).toEqual([]);
+  });
+
+  it('reports each finding with its catalogue severity, ids of the document as subjects and a full sentence', () => {
+    const wrong: unknown[] = [];
+    for (const { doc, finding } of everyFinding()) {
+      const ids = idsOf(doc);
+      const severity = RULES[finding.rule as keyof typeof RULES];
+      const strangers = finding.subjects.filter((id) => !ids.has(id));
+      if (severity !== finding.severity || strangers.length > 0 || !/^\S.*[.]$/s.test(finding.message) || /undefined|\[object/.test(finding.message)) {
+        wrong.push({ finding, severity, strangers });
+      }
+    }
+    expect(wrong).toEqual([]);
+  });
+
+  it('reports nothing above info on the approved demo design', () => {
+    expect(analyze(harborRoadV2()).findings.filter((f) => f.severity !== 'info')).toEqual([]);
+  });
+});
