@@ -22,6 +22,12 @@ describe('address math on published values', () => {
     expect(usableCount('192.0.2.7/32')).toBe(BigInt(1)); // RFC 4632: a /32 is one host route
   });
 
+  it('keeps every IPv6 address for hosts on /127 and /128, and the subnet-router anycast address out of larger subnets', () => {
+    expect(usableCount('2001:db8::/127')).toBe(BigInt(2)); // RFC 6164 §5: both addresses of a /127 are used
+    expect(usableCount('2001:db8::1/128')).toBe(BigInt(1)); // RFC 4291 §2.3: a /128 is one interface
+    expect(usableCount('2001:db8::/126')).toBe(BigInt(3)); // RFC 4291 §2.6.1: ::0 of the subnet is the anycast address
+  });
+
   it('finds the network and broadcast address of a block', () => {
     expect(networkAddress('203.0.113.77/24')).toBe('203.0.113.0'); // RFC 5737 §3 range, RFC 4632 masking
     expect(broadcastAddress('203.0.113.77/24')).toBe('203.0.113.255'); // RFC 919 §7 all-ones host part
@@ -108,6 +114,17 @@ describe('address math cross-checked with the ip-address package', () => {
         const text = new Address6(parts.map((p) => p.toString(16)).join(':')).correctForm(); // RFC 5952 compressed
         expect(parseIp(text)?.value).toBe(BigInt(new Address6(text).bigInt()));
         expect(normalizeIp(text)).toBe(text);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('agrees on overlap: two CIDR blocks overlap exactly when one lies inside the other', () => {
+    // RFC 4632 §3.1: blocks are aligned powers of two, so they nest or are disjoint.
+    fc.assert(
+      fc.property(ipv4, fc.integer({ min: 0, max: 32 }), ipv4, fc.integer({ min: 0, max: 32 }), (a, pa, b, pb) => {
+        const [x, y] = [new Address4(`${a}/${pa}`), new Address4(`${b}/${pb}`)];
+        expect(overlap(`${a}/${pa}`, `${b}/${pb}`)).toBe(x.isInSubnet(y) || y.isInSubnet(x));
       }),
       { numRuns: 500 },
     );
