@@ -57,6 +57,20 @@ describe('MTU limits by family', () => {
   });
 });
 
+describe('reserved addresses by family', () => {
+  it('flags the IPv6 subnet-router anycast address on a port, but no IPv6 "broadcast"', () => {
+    const v6 = { cidr: '2001:db8:10::/64' }; // RFC 3849
+    expect(findings('address-reserved', v6, '2001:db8:10::')[0].message).toContain('the subnet-router anycast address'); // RFC 4291 §2.6.1
+    expect(findings('address-reserved', v6, '2001:db8:10::ffff:ffff:ffff:ffff')).toEqual([]); // RFC 4291 §2: no broadcast in IPv6
+    expect(findings('address-reserved', { cidr: '2001:db8:10::/127' }, '2001:db8:10::')).toEqual([]); // RFC 6164 §5
+  });
+
+  it('keeps both addresses of an IPv4 /31 for hosts', () => {
+    expect(findings('address-reserved', { cidr: '198.51.100.0/31' }, '198.51.100.1')).toEqual([]); // RFC 3021 §2.1
+    expect(findings('address-reserved', { cidr: '198.51.100.0/30' }, '198.51.100.3')[0].message).toContain('the broadcast address'); // RFC 919 §7
+  });
+});
+
 describe('gateways', () => {
   it('flags a gateway on the network or broadcast address', () => {
     expect(findings('address-reserved', { gateway: '198.51.100.0' })[0]).toMatchObject({ subjects: ['na'] }); // network address, RFC 4632
