@@ -32,7 +32,7 @@ export function ReportHeadline({ summary, simulatedWith }: { summary: ReportSumm
           <View key={stat.key} style={styles.stat} testID={`report-headline-${stat.key}`}>
             <View style={styles.valueRow}>
               <Icon name={stat.icon} size={20} color={stat.color} />
-              <Text variant="display" color={stat.color}>
+              <Text variant="display" color={stat.color} testID={`report-headline-${stat.key}-value`}>
                 {stat.value}
               </Text>
             </View>

@@ -1,0 +1,110 @@
+import { fireEvent, screen, waitFor, within } from '@testing-library/react-native';
+import { DesignsScreen } from '@/components/designs/DesignsScreen';
+import { api } from '@/lib/api/client';
+import type { User } from '@/shared/api/auth';
+import type { DesignListItem } from '@/shared/api/designs';
+import { docs, people, versionSummary } from './helpers';
+import { renderWithClient } from '../helpers/render';
+
+jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
+jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
+jest.mock('react-native/Libraries/Utilities/useWindowDimensions', () => ({ __esModule: true, default: jest.fn() }));
+const dimensions: jest.Mock = jest.requireMock('react-native/Libraries/Utilities/useWindowDimensions').default;
+const get = api.get as jest.Mock;
+
+function listItem(id: number, name: string, status: DesignListItem['status'], n: number | null, doc = docs.v2): DesignListItem {
+  const latest = n === null ? null : versionSummary({ number: n, doc });
+  return {
+    id,
+    name,
+    site: 'Harbor Road server room',
+    status,
+    latestVersion: latest && { number: latest.number, createdAt: latest.createdAt, summary: latest.summary, review: status },
+    updatedAt: '2026-11-26T15:00:00.000Z',
+  };
+}
+
+const HARBOR = listItem(1, 'Harbor Road storage', 'approved', 2);
+const FLAWED = listItem(2, 'Cold room annex', 'changes-requested', 1, docs.v1);
+const EMPTY = listItem(3, 'Loading dock', 'draft', null);
+
+function serve(designs: DesignListItem[]) {
+  get.mockImplementation(async (path: string) => {
+    if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [], invitations: [] };
+    if (path.startsWith('/api/designs')) {
+      const q = new URLSearchParams(path.split('?')[1] ?? '').get('q');
+      return { designs: q ? designs.filter((d) => d.name.toLowerCase().includes(q.toLowerCase())) : designs };
+    }
+    throw new Error(`unexpected request ${path}`);
+  });
+}
+
+function renderList(user: User, width = 390) {
+  dimensions.mockReturnValue({ width, height: 844, scale: 1, fontScale: 1 });
+  return renderWithClient(<DesignsScreen />, { user });
+}
+
+beforeEach(() => get.mockReset());
+
+describe('designs screen', () => {
+  it('lists each design with its status in words, latest version and redundancy summary on a phone', async () => {
+    serve([HARBOR, FLAWED, EMPTY]);
+    renderList(people.designer);
+    const list = await screen.findByTestId('designs-list');
+    expect(within(list).getByTestId('design-1-status')).toHaveTextContent('Approved');
+    expect(within(list).getByTestId('design-2-status')).toHaveTextContent('Changes asked');
+    expect(within(list).getByTestId('design-3-status')).toHaveTextContent('Draft');
+    // product.md: version 2 makes all six hosts redundant; version 1 leaves cam-rec-2 with single points.
+    expect(within(list).getByTestId('design-1-latest')).toHaveTextContent(/Version 2.*6 of 6 hosts redundant · no errors/);
+    const flawed = FLAWED.latestVersion!.summary;
+    expect(within(list).getByTestId('design-2-latest')).toHaveTextContent(
+      new RegExp(`${flawed.redundantHosts} of 6 hosts redundant · ${flawed.errors} errors · ${flawed.singlePointsOfFailure} single points of failure`),
+    );
+    expect(within(list).getByTestId('design-3-latest')).toHaveTextContent('No versions yet');
+    expect(screen.queryByTestId('designs-table')).toBeNull();
+  });
+
+  it('uses a table on a wide screen', async () => {
+    serve([HARBOR]);
+    renderList(people.reviewer, 1440);
+    expect(await screen.findByTestId('designs-table')).toHaveTextContent(/Harbor Road storage/);
+    expect(screen.queryByTestId('designs-list')).toBeNull();
+  });
+
+  it('offers New design to designers and not to reviewers or installers', async () => {
+    serve([HARBOR]);
+    const { unmount } = renderList(people.designer);
+    expect(await screen.findByTestId('designs-new')).toBeOnTheScreen();
+    unmount();
+    for (const user of [people.reviewer, people.installer]) {
+      const view = renderList(user);
+      await screen.findByTestId('designs-list');
+      expect(screen.queryByTestId('designs-new')).toBeNull();
+      view.unmount();
+    }
+  });
+
+  it('searches on the server by name and shows what matched', async () => {
+    serve([HARBOR, FLAWED]);
+    renderList(people.designer);
+    await screen.findByTestId('design-2');
+    fireEvent.changeText(screen.getByTestId('designs-search'), 'annex');
+    await waitFor(() => expect(get).toHaveBeenCalledWith('/api/designs?q=annex'));
+    await waitFor(() => expect(screen.queryByTestId('design-1')).toBeNull());
+    expect(screen.getByTestId('designs-count')).toHaveTextContent('1 matching “annex”');
+  });
+
+  it('invites a designer to start the first design when the team has none', async () => {
+    serve([]);
+    renderList(people.designer);
+    expect(await screen.findByTestId('designs-empty')).toHaveTextContent(/No designs yet/);
+    expect(screen.getByTestId('designs-empty-new')).toBeOnTheScreen();
+  });
+
+  it('tells an installer that nothing is approved yet rather than offering to start one', async () => {
+    serve([]);
+    renderList(people.installer);
+    expect(await screen.findByTestId('designs-empty')).toHaveTextContent(/Nothing approved to build yet/);
+    expect(screen.queryByTestId('designs-empty-new')).toBeNull();
+  });
+});

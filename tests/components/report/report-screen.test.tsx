@@ -1,0 +1,136 @@
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
+import { ReportScreen } from '@/components/report/ReportScreen';
+import { api } from '@/lib/api/client';
+import { createNamer } from '@/lib/report/names';
+import { analyze } from '@/shared/analysis/analyze';
+import { summarize } from '@/shared/analysis/summary';
+import type { Topology } from '@/shared/topology/schema';
+import { designResponse, docs, people, versionDetail, versionSummary } from '../designs/helpers';
+import { renderWithClient } from '../helpers/render';
+
+jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
+jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
+const get = api.get as jest.Mock;
+
+/** The server's answers for version n of Harbor Road: the document and the report of `analyze`. */
+function serve(n: 1 | 2) {
+  const doc = n === 1 ? docs.v1 : docs.v2;
+  const report = analyze(doc);
+  get.mockImplementation(async (path: string) => {
+    if (path === `/api/designs/1/versions/${n}`) return { version: versionDetail({ number: n, doc }) };
+    if (path === `/api/designs/1/versions/${n}/report`) return { report, summary: summarize(report, doc) };
+    if (path === '/api/designs/1') return designResponse([versionSummary({ number: n, doc })]);
+    throw new Error(`unexpected request ${path}`);
+  });
+  return { doc, report };
+}
+
+function renderReport(n: 1 | 2) {
+  const served = serve(n);
+  renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer });
+  return served;
+}
+
+/** Hosts that reach an array without the failures and reach none of them with: read off analyze itself. */
+function cutOffBy(doc: Topology, failed: string[]): string[] {
+  const after = new Set(analyze(doc, { failed }).hosts.map((h) => `${h.host}>${h.array}`));
+  return analyze(doc).hosts.filter((h) => !after.has(`${h.host}>${h.array}`)).map((h) => h.host);
+}
+
+beforeEach(() => get.mockReset());
+
+describe('failure report', () => {
+  it('heads the report with the saved summary: redundant hosts of all, errors, warnings, single points', async () => {
+    const { doc, report } = renderReport(1);
+    const summary = summarize(report, doc);
+    const headline = await screen.findByTestId('report-headline');
+    expect(within(headline).getByTestId('report-headline-hosts-value')).toHaveTextContent(`${summary.redundantHosts} of ${summary.hosts}`);
+    expect(within(headline).getByTestId('report-headline-errors-value')).toHaveTextContent(String(summary.errors));
+    expect(within(headline).getByTestId('report-headline-warnings-value')).toHaveTextContent(String(summary.warnings));
+    expect(within(headline).getByTestId('report-headline-spof-value')).toHaveTextContent(String(summary.singlePointsOfFailure));
+    // product.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
+    expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
+    expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
+  });
+
+  it("names cam-rec-2's single points of failure by device and port in version 1", async () => {
+    const { doc, report } = renderReport(1);
+    const row = await screen.findByTestId('report-host-cam-rec-2-spofs');
+    const expected = report.hosts.find((h) => h.host === 'cam-rec-2')!.singlePointsOfFailure;
+    expect(expected.length).toBeGreaterThan(0);
+    const namer = createNamer(doc);
+    for (const unit of expected) expect(row).toHaveTextContent(namer.unit(unit), { exact: false });
+    // product.md: cam-rec-2 is cabled only to fab-a, through its first card.
+    expect(row).toHaveTextContent(/switch fab-a/);
+    expect(row).toHaveTextContent(/card-1 of cam-rec-2/);
+    expect(row).toHaveTextContent(/cable HR-A-10 \(cam-rec-2 card-1 p1 → fab-a p\d+\)/);
+    expect(screen.getByTestId('report-failure-fab-a')).toHaveTextContent(/Cuts off cam-rec-2 from vault-1/);
+  });
+
+  it('lists the management port on a data switch and the single points among the errors of version 1', async () => {
+    renderReport(1);
+    const errors = await screen.findByTestId('report-findings-error');
+    expect(within(errors).getByTestId('report-finding-management-port-on-data-switch')).toHaveTextContent(/ctl-b mgmt/);
+    expect(within(errors).getAllByTestId('report-finding-single-point-of-failure').length).toBeGreaterThan(0);
+  });
+
+  it('shows version 2 with no single point of failure and no management port on a data switch', async () => {
+    renderReport(2);
+    expect(await screen.findByTestId('report-failures-none')).toBeOnTheScreen();
+    expect(screen.queryByTestId('report-finding-management-port-on-data-switch')).toBeNull();
+    expect(screen.queryByTestId('report-finding-single-point-of-failure')).toBeNull();
+    expect(screen.queryByTestId('report-host-cam-rec-2-spofs')).toBeNull();
+  });
+
+  it('recomputes in the browser when fab-a fails in version 1 and names the hosts that lose access', async () => {
+    const { doc } = renderReport(1);
+    fireEvent.changeText(await screen.findByTestId('whatif-search'), 'fab-a');
+    fireEvent.press(screen.getByTestId('whatif-add-fab-a'));
+    const impact = await screen.findByTestId('whatif-impact', {}, { timeout: 2000 });
+    const lost = cutOffBy(doc, ['fab-a']);
+    expect(lost).toEqual(['cam-rec-2']); // product.md: cam-rec-2 hangs on fab-a alone
+    for (const host of lost) expect(within(impact).getByTestId(`whatif-lost-${host}`)).toHaveTextContent(`${host} would lose access to vault-1`);
+    expect(screen.getByTestId('report-host-cam-rec-2-lost')).toHaveTextContent('Would lose access');
+    const simulated = summarize(analyze(doc, { failed: ['fab-a'] }), doc);
+    expect(screen.getByTestId('report-headline-hosts-value')).toHaveTextContent(`${simulated.redundantHosts} of ${simulated.hosts}`);
+    expect(screen.getByTestId('report-headline-simulated')).toHaveTextContent('Simulation: switch fab-a failed');
+  });
+
+  it('cuts nobody off when fab-a fails in version 2, but says who keeps access with less to spare', async () => {
+    const { doc } = renderReport(2);
+    fireEvent.changeText(await screen.findByTestId('whatif-search'), 'fab-a');
+    fireEvent.press(screen.getByTestId('whatif-add-fab-a'));
+    await screen.findByTestId('whatif-impact', {}, { timeout: 2000 });
+    expect(cutOffBy(doc, ['fab-a'])).toEqual([]);
+    expect(screen.getByTestId('whatif-none-lost')).toBeOnTheScreen();
+    // Every host still reaches vault-1, now over fab-b alone: read off analyze, not assumed.
+    const before = new Map(analyze(doc).hosts.map((h) => [h.host, h]));
+    const after = analyze(doc, { failed: ['fab-a'] }).hosts;
+    const lessToSpare = (h: (typeof after)[number]) => !h.redundant || h.sessions < before.get(h.host)!.sessions;
+    const reduced = after.filter(lessToSpare).map((h) => h.host);
+    expect(reduced.length).toBeGreaterThan(0);
+    for (const host of reduced) expect(screen.getByTestId('whatif-reduced')).toHaveTextContent(new RegExp(host));
+    for (const h of after.filter((x) => !lessToSpare(x))) expect(screen.getByTestId('whatif-reduced')).not.toHaveTextContent(new RegExp(h.host));
+  });
+
+  it('goes back to the saved report on reset', async () => {
+    renderReport(1);
+    fireEvent.changeText(await screen.findByTestId('whatif-search'), 'fab-a');
+    fireEvent.press(screen.getByTestId('whatif-add-fab-a'));
+    await screen.findByTestId('whatif-impact', {}, { timeout: 2000 });
+    fireEvent.press(screen.getByTestId('whatif-reset'));
+    await act(() => new Promise((resolve) => setTimeout(resolve, 400)));
+    await waitFor(() => expect(screen.queryByTestId('whatif-impact')).toBeNull(), { timeout: 2000 });
+    expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
+    expect(screen.queryByTestId('report-host-cam-rec-2-lost')).toBeNull();
+  });
+
+  it('finds units to fail by a host name across its cards and cables', async () => {
+    renderReport(1);
+    fireEvent.changeText(await screen.findByTestId('whatif-search'), 'cam-rec-2 card-1');
+    const results = screen.getByTestId('whatif-results');
+    expect(within(results).getByTestId('whatif-add-cam-rec-2.card-1')).toBeOnTheScreen();
+    expect(within(results).getByTestId('whatif-add-cable-a-10')).toBeOnTheScreen();
+    expect(within(results).queryByTestId('whatif-add-fab-b')).toBeNull();
+  });
+});
