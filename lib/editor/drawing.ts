@@ -169,3 +169,8 @@ export const KIND_STYLE: Record<Device['kind'], KindStyle> = {
 
 /** Where the header's name and mark sit. */
 export const HEADER_LAYOUT = { markX: 8, markY: 9, nameX: 30, nameY: 22, nameSize: 13, smallSize: 10.5, portLabelSize: 10.5, groupLabelSize: 11 } as const;
+
+/** What fits inside a 30 px port: the name, cut to five characters, smaller from four. */
+export function portCaption(name: string): { text: string; size: number } {
+  return { text: name.length > 5 ? `${name.slice(0, 4)}…` : name, size: name.length >= 4 ? 9 : HEADER_LAYOUT.portLabelSize };
+}

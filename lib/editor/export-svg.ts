@@ -13,6 +13,7 @@ import {
   kindMarkPath,
   midpoint,
   plinthPath,
+  portCaption,
   portPath,
   portRailPath,
   silhouettePath,
@@ -113,7 +114,8 @@ function deviceSvg(box: DeviceBox, cabled: ReadonlySet<string>, fabrics: Fabrics
     out.push(`<path ${attrs({ d: portPath(port.connector, port.rect), fill, stroke: port.role === 'management' ? INK.copper : INK.inkMuted, 'stroke-width': 1.2, 'stroke-dasharray': port.role === 'management' ? '3 2' : undefined })}/>`);
     const rail = portRailPath(port.connector, port.rect);
     if (rail) out.push(`<path ${attrs({ d: rail, stroke: INK.inkMuted, 'stroke-width': 1 })}/>`);
-    out.push(text(port.anchor.x, port.anchor.y + 4, port.name, { 'text-anchor': 'middle', 'font-size': L.portLabelSize, fill: INK.ink, 'font-family': FONT_FAMILY }));
+    const caption = portCaption(port.name);
+    out.push(text(port.anchor.x, port.anchor.y + 4, caption.text, { 'text-anchor': 'middle', 'font-size': caption.size, fill: INK.ink, 'font-family': FONT_FAMILY }));
   }
   if (m.spof) out.push(spofOutline(0, 0, shape.width, shape.height));
   return `<g ${attrs({ id: `device-${box.id}`, transform: `translate(${box.position.x} ${box.position.y})` })}>${out.join('')}</g>`;

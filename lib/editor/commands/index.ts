@@ -1,5 +1,6 @@
 import type { Topology } from '@/shared/topology/schema';
 import { addressingCommands } from '@/lib/editor/commands/addressing';
+import { assignNetworkCommands } from '@/lib/editor/commands/assign-network';
 import { cablingCommands } from '@/lib/editor/commands/cabling';
 import type { CommandDef } from '@/lib/editor/commands/define';
 import type * as Fns from '@/lib/editor/commands/functions';
@@ -17,7 +18,7 @@ import { CommandError, commandErrorFromZod } from '@/lib/editor/errors';
  * first, so a bad call from anywhere becomes a CommandError with a field path, never a broken
  * document. Each command is also exported as a plain typed function for direct use.
  */
-const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands] as const;
+const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands, ...assignNetworkCommands] as const;
 
 // `command()` widens names to string; the plain functions' names restore them for typed calls.
 type ArgsOf<F> = F extends (doc: Topology, args: infer A) => Topology ? A : never;
@@ -45,5 +46,6 @@ export type { AddAdapterArgs, AddControllerArgs, AddPortArgs, SetPortArgs } from
 export { plannedCable, suggestMedia, type CablePortsArgs, type SetCableArgs } from '@/lib/editor/commands/cabling';
 export { plannedNetworkId, type AddNetworkArgs, type UpdateNetworkArgs } from '@/lib/editor/commands/networks';
 export { planAddresses, type AutoAssignArgs } from '@/lib/editor/commands/addressing';
+export type { AssignNetworkArgs } from '@/lib/editor/commands/assign-network';
 export { freeSpot, type MoveDeviceArgs, type MoveDevicesArgs } from '@/lib/editor/commands/layout';
 export { PATTERN_IDS, type ApplyPatternArgs, type PatternId } from '@/lib/editor/commands/patterns';

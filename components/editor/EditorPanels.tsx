@@ -1,0 +1,79 @@
+import { useState } from 'react';
+import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+import { useStore } from 'zustand';
+import { Text, colors, space, TAP_TARGET } from '@/components/ui';
+import { useEditorDoc, useSelection } from '@/lib/editor/hooks';
+import { liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { editorStore } from '@/lib/editor/store';
+import { Inspector, inspectorTitle } from '@/components/inspector/Inspector';
+import { BottomSheet } from '@/components/editor/BottomSheet';
+import { FindingsPanel } from '@/components/editor/FindingsPanel';
+import { Palette } from '@/components/editor/Palette';
+
+type Tab = 'inspector' | 'findings';
+
+function TabButton({ label, active, onPress, testID }: { label: string; active: boolean; onPress: () => void; testID: string }) {
+  return (
+    <Pressable role="tab" aria-selected={active} onPress={onPress} testID={testID} style={[styles.tab, active && styles.tabActive]}>
+      <Text variant="smallStrong" color={active ? 'primary' : 'inkMuted'}>
+        {label}
+      </Text>
+    </Pressable>
+  );
+}
+
+/** The wide screen's right column: the inspector, or the findings list. */
+export function SidePanels() {
+  const [tab, setTab] = useState<Tab>('inspector');
+  const problems = useStore(liveAnalysisStore, (s) => s.report?.findings.length ?? 0);
+  return (
+    <View style={styles.side} testID="side-panels">
+      <View role="tablist" aria-label="Side panel" style={styles.tabs}>
+        <TabButton label="Inspector" active={tab === 'inspector'} onPress={() => setTab('inspector')} testID="side-tab-inspector" />
+        <TabButton label={`Findings (${problems})`} active={tab === 'findings'} onPress={() => setTab('findings')} testID="side-tab-findings" />
+      </View>
+      <ScrollView style={styles.sideScroll} contentContainerStyle={styles.sideBody} keyboardShouldPersistTaps="handled">
+        {tab === 'inspector' ? <Inspector /> : <FindingsPanel />}
+      </ScrollView>
+    </View>
+  );
+}
+
+type PhoneSheetsProps = { sheet: null | 'add' | 'findings'; onSheet: (sheet: null | 'add' | 'findings') => void; hasSelection: boolean };
+
+/** The phone's sheets: the palette or findings when asked for, else the inspector while something is selected. */
+export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) {
+  const [expanded, setExpanded] = useState(false);
+  const doc = useEditorDoc();
+  const selection = useSelection();
+  const toggle = () => setExpanded(!expanded);
+  if (sheet === 'add') {
+    return (
+      <BottomSheet title="Add to the canvas" expanded onToggle={toggle} onClose={() => onSheet(null)} testID="sheet-add">
+        <Palette onAdded={() => onSheet(null)} />
+      </BottomSheet>
+    );
+  }
+  if (sheet === 'findings') {
+    return (
+      <BottomSheet title="Findings" expanded={expanded} onToggle={toggle} onClose={() => onSheet(null)} testID="sheet-findings">
+        <FindingsPanel onFocused={() => onSheet(null)} />
+      </BottomSheet>
+    );
+  }
+  if (!hasSelection) return null;
+  return (
+    <BottomSheet title={inspectorTitle(doc, selection)} expanded={expanded} onToggle={toggle} onClose={() => editorStore.getState().clearSelection()} testID="sheet-inspector">
+      <Inspector showTitle={false} />
+    </BottomSheet>
+  );
+}
+
+const styles = StyleSheet.create({
+  side: { width: 360, backgroundColor: colors.surface, borderLeftWidth: 1, borderLeftColor: colors.line },
+  tabs: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: colors.line, paddingHorizontal: space.sm },
+  tab: { minHeight: TAP_TARGET, paddingHorizontal: space.md, justifyContent: 'center', borderBottomWidth: 3, borderBottomColor: 'transparent' },
+  tabActive: { borderBottomColor: colors.copper },
+  sideScroll: { flex: 1 },
+  sideBody: { padding: space.lg, gap: space.lg },
+});

@@ -1,0 +1,89 @@
+import { ScrollView, StyleSheet, View } from 'react-native';
+import { useStore } from 'zustand';
+import { Text, colors, space } from '@/components/ui';
+import { useBaseVersion, useCanRedo, useCanUndo, useDirty, useEditorDoc, useReadOnly, useSelection } from '@/lib/editor/hooks';
+import { liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { editorStore } from '@/lib/editor/store';
+import { IconButton } from '@/components/editor/IconButton';
+import { arrange, deleteSelection, downloadDiagram } from '@/components/editor/editor-actions';
+
+export type EditorView = 'canvas' | 'networks';
+
+type ToolbarProps = {
+  wide: boolean;
+  view: EditorView;
+  onView: (view: EditorView) => void;
+  onBack: () => void;
+  onSave: () => void;
+  onHelp: () => void;
+  onAdd: () => void;
+  onFindings: () => void;
+  /** Wide screens: whether the palette column is shown. */
+  paletteOpen: boolean;
+};
+
+function Status() {
+  const dirty = useDirty();
+  const readOnly = useReadOnly();
+  const base = useBaseVersion();
+  const errors = useStore(liveAnalysisStore, (s) => s.report?.findings.filter((f) => f.severity === 'error').length ?? null);
+  const version = base === null ? 'no version yet' : `version ${base}`;
+  const state = readOnly ? `Read-only · ${version}` : dirty ? `Unsaved · on ${version}` : base === null ? 'No version saved yet' : `Saved · ${version}`;
+  return (
+    <Text variant="caption" color={dirty && !readOnly ? 'copper' : 'inkMuted'} numberOfLines={1} testID="editor-status">
+      {`${dirty && !readOnly ? '● ' : ''}${state}${errors === null ? '' : ` · ${errors} problem${errors === 1 ? '' : 's'}`}`}
+    </Text>
+  );
+}
+
+/** The editor's bar: back, the design and its state, undo/redo, arrange, views, export, help and save. */
+export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAdd, onFindings, paletteOpen }: ToolbarProps) {
+  const name = useEditorDoc().name;
+  const readOnly = useReadOnly();
+  const dirty = useDirty();
+  const canUndo = useCanUndo();
+  const canRedo = useCanRedo();
+  const selected = useSelection().length > 0;
+  const store = editorStore.getState();
+  const tools = (
+    <>
+      {!readOnly && view === 'canvas' ? <IconButton icon="add" label={wide ? (paletteOpen ? 'Hide the palette' : 'Add devices') : 'Add a device'} onPress={onAdd} active={paletteOpen} showLabel={wide && !paletteOpen} testID="toolbar-add" /> : null}
+      {!readOnly ? <IconButton icon="undo" label="Undo" shortcut="Ctrl+Z" onPress={() => store.undo()} disabled={!canUndo} testID="toolbar-undo" /> : null}
+      {!readOnly ? <IconButton icon="redo" label="Redo" shortcut="Ctrl+Shift+Z" onPress={() => store.redo()} disabled={!canRedo} testID="toolbar-redo" /> : null}
+      {!readOnly && wide && view === 'canvas' ? <IconButton icon="trash" label="Delete selected" shortcut="Delete" onPress={deleteSelection} disabled={!selected} testID="toolbar-delete" /> : null}
+      {!readOnly && view === 'canvas' ? <IconButton icon="arrange" label="Auto-arrange" shortcut="Shift+A" onPress={arrange} showLabel={wide} testID="toolbar-arrange" /> : null}
+      <IconButton icon={view === 'canvas' ? 'networks' : 'canvas'} label={view === 'canvas' ? 'Networks & addresses' : 'Back to the canvas'} onPress={() => onView(view === 'canvas' ? 'networks' : 'canvas')} showLabel={wide} testID="toolbar-view" />
+      {!wide && view === 'canvas' ? <IconButton icon="findings" label="Findings" onPress={onFindings} testID="toolbar-findings" /> : null}
+      <IconButton icon="export" label="Export SVG" onPress={() => void downloadDiagram()} showLabel={wide} testID="toolbar-export" />
+      <IconButton icon="help" label="Canvas help" shortcut="?" onPress={onHelp} testID="toolbar-help" />
+    </>
+  );
+  const save = !readOnly ? <IconButton icon="save" label="Save version" shortcut="Ctrl+S" tone="primary" showLabel={wide} onPress={onSave} disabled={!dirty} testID="toolbar-save" /> : null;
+  return (
+    <View style={styles.bar} testID="editor-toolbar">
+      <View style={styles.top}>
+        <IconButton icon="back" label="Back to the design" onPress={onBack} testID="toolbar-back" />
+        <View style={styles.title}>
+          <Text variant="bodyStrong" numberOfLines={1} testID="editor-design-name">
+            {name}
+          </Text>
+          <Status />
+        </View>
+        {wide ? <View style={styles.tools}>{tools}</View> : null}
+        {save}
+      </View>
+      {!wide ? (
+        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.tools}>
+          {tools}
+        </ScrollView>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  bar: { backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.line, paddingHorizontal: space.sm, paddingVertical: space.xs, gap: 2 },
+  top: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  title: { flex: 1, minWidth: 0 },
+  tools: { flexDirection: 'row', alignItems: 'center', gap: 2 },
+});

@@ -1,0 +1,94 @@
+import { StyleSheet, View } from 'react-native';
+import { Button, Text, space } from '@/components/ui';
+import { SWITCH_ROLES, type Device, type SwitchRole, type Topology } from '@/shared/topology/schema';
+import { groupsOf } from '@/lib/editor/commands/doc';
+import { iqnField, nameField, rackField, ruField } from '@/lib/editor/fields';
+import { editorStore } from '@/lib/editor/store';
+import { ChipPicker } from '@/components/inspector/ChipPicker';
+import { CommitField } from '@/components/inspector/CommitField';
+import { FindingsAbout } from '@/components/inspector/FindingsAbout';
+import { HostPaths } from '@/components/inspector/HostPaths';
+import { PartList } from '@/components/inspector/PartList';
+import { runEdit } from '@/components/inspector/run';
+
+const ROLE_CHIPS = SWITCH_ROLES.map((role) => ({ value: role, label: role === 'data' ? 'Data' : role === 'management' ? 'Management' : 'Shared' }));
+
+/** The prefix other hosts' initiator names use ("iqn.2026-01.example.tidewater"), to suggest one for this host. */
+function iqnSuggestion(doc: Topology, device: Device): string | null {
+  for (const other of doc.devices) {
+    if (other.kind !== 'host' || other.id === device.id || !other.iqn) continue;
+    const colon = other.iqn.indexOf(':');
+    if (other.iqn.startsWith('iqn.') && colon > 0) return `${other.iqn.slice(0, colon)}:${device.name.toLowerCase().replace(/[^a-z0-9.:-]+/g, '-')}`;
+  }
+  return null;
+}
+
+type Props = { device: Device; doc: Topology; readOnly: boolean };
+
+/** A device: its name, role (switch) or initiator name (host), rack place, parts and findings. */
+export function DeviceInspector({ device, doc, readOnly }: Props) {
+  const iqnNote = device.kind === 'host' ? iqnSuggestion(doc, device) : null;
+  const groups = groupsOf(device);
+  return (
+    <View style={styles.wrap} testID="inspector-device">
+      <CommitField label="Name" value={device.name} schema={nameField} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renameDevice', { id: device.id, name })} />
+      {device.kind === 'switch' ? (
+        <ChipPicker<SwitchRole>
+          label="Carries"
+          hint="A data switch carries storage fabrics, a management switch the out-of-band network; a shared switch carries both (the analysis warns)."
+          chips={ROLE_CHIPS}
+          value={device.role}
+          disabled={readOnly}
+          testID="inspector-switch-role"
+          onChange={(role) => runEdit('setDevice', { id: device.id, role })}
+        />
+      ) : null}
+      {device.kind === 'host' ? (
+        <View style={styles.group}>
+          <CommitField
+            label="Initiator name (IQN)"
+            hint="iqn.YYYY-MM.reversed-domain:unique-part, or eui. / naa. names (RFC 7143 §4.2.7). Leave empty if not known yet."
+            value={device.iqn ?? ''}
+            schema={iqnField}
+            readOnly={readOnly}
+            placeholder="iqn.2026-01.example.tidewater:host-name"
+            testID="inspector-iqn"
+            onCommit={(iqn) => runEdit('setDevice', { id: device.id, iqn })}
+          />
+          {!readOnly && !device.iqn && iqnNote ? <Button label={`Use ${iqnNote}`} variant="ghost" size="compact" onPress={() => runEdit('setDevice', { id: device.id, iqn: iqnNote })} testID="inspector-iqn-suggest" /> : null}
+        </View>
+      ) : null}
+      <View style={styles.row}>
+        <View style={styles.cell}>
+          <CommitField label="Rack" value={device.rack ?? ''} schema={rackField} readOnly={readOnly} testID="inspector-rack" onCommit={(rack) => runEdit('setDevice', { id: device.id, rack })} />
+        </View>
+        <View style={styles.cell}>
+          <CommitField label="Rack unit" value={device.ru === undefined ? '' : String(device.ru)} schema={ruField} readOnly={readOnly} keyboardType="number-pad" testID="inspector-ru" onCommit={(ru) => runEdit('setDevice', { id: device.id, ru })} />
+        </View>
+      </View>
+      {device.kind === 'host' ? <HostPaths hostId={device.id} doc={doc} /> : null}
+      <PartList device={device} groups={groups} readOnly={readOnly} />
+      <FindingsAbout ids={[device.id, ...groups.map((g) => g.id)]} testID="inspector-findings" />
+      {!readOnly ? (
+        <Button
+          label={`Delete ${device.name || 'device'}`}
+          variant="danger"
+          size="compact"
+          testID="inspector-delete"
+          onPress={() => {
+            runEdit('deleteDevices', { ids: [device.id] });
+            editorStore.getState().clearSelection();
+          }}
+        />
+      ) : null}
+      <Text variant="caption" color="inkMuted">{`Id ${device.id}`}</Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  group: { gap: space.xs },
+  row: { flexDirection: 'row', gap: space.md },
+  cell: { flex: 1 },
+});
