@@ -3,8 +3,9 @@ import type { Href } from 'expo-router';
 /**
  * The canvas at /designs/[id]/edit is built separately. Until it ships, "Open in editor" stays
  * hidden so no link leads nowhere; the canvas flips this one constant when its route exists.
+ * The route exists (app/(app)/designs/[id]/edit.tsx).
  */
-export const EDITOR_READY = false;
+export const EDITOR_READY = true;
 
 export const newDesignHref: Href = '/designs/new';
 
