@@ -1,4 +1,5 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { useStore } from 'zustand';
 import { Text, colors, space } from '@/components/ui';
 import { useBaseVersion, useCanRedo, useCanUndo, useDirty, useEditorDoc, useReadOnly, useSelection } from '@/lib/editor/hooks';
@@ -45,6 +46,7 @@ export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAd
   const canRedo = useCanRedo();
   const selected = useSelection().length > 0;
   const store = editorStore.getState();
+  const insets = useSafeAreaInsets();
   const tools = (
     <>
       {!readOnly && view === 'canvas' ? <IconButton icon="add" label={wide ? (paletteOpen ? 'Hide the palette' : 'Add devices') : 'Add a device'} onPress={onAdd} active={paletteOpen} showLabel={wide && !paletteOpen} testID="toolbar-add" /> : null}
@@ -60,7 +62,7 @@ export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAd
   );
   const save = !readOnly ? <IconButton icon="save" label="Save version" shortcut="Ctrl+S" tone="primary" showLabel={wide} onPress={onSave} disabled={!dirty} testID="toolbar-save" /> : null;
   return (
-    <View style={styles.bar} testID="editor-toolbar">
+    <View style={[styles.bar, !wide && { paddingTop: insets.top + space.xs }]} testID="editor-toolbar">
       <View style={styles.top}>
         <IconButton icon="back" label="Back to the design" onPress={onBack} testID="toolbar-back" />
         <View style={styles.title}>

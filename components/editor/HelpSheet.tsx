@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Text, colors, space } from '@/components/ui';
 import { Overlay } from '@/components/editor/Overlay';
-import { SHORTCUTS } from '@/components/editor/shortcuts';
+import { SHORTCUTS } from '@/lib/editor/shortcuts';
 
 const GESTURES: { wide: string; phone: string; does: string }[] = [
   { wide: 'Click', phone: 'Tap', does: 'Select a device, card, controller, port or cable' },

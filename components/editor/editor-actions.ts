@@ -5,7 +5,7 @@ import { buildSnapshot, fitToBounds, GRID_SIZE, zoomAbout } from '@/lib/editor/g
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
 import type { Gestures } from '@/lib/editor/gestures';
-import type { ShortcutAction } from '@/components/editor/shortcuts';
+import type { ShortcutAction } from '@/lib/editor/shortcuts';
 
 /** The toolbar's and the keyboard's edits and view moves, each a store action or one named command. */
 export function deleteSelection(): void {

@@ -4,9 +4,7 @@ import { useDesign } from '@/lib/api/designs';
 import { useVersion } from '@/lib/api/versions';
 import { can } from '@/shared/roles';
 import type { Topology } from '@/shared/topology/schema';
-import { buildSnapshot } from '@/lib/editor/geometry';
-import { overlappingDevices } from '@/lib/editor/hit-test';
-import { computeArrangement } from '@/lib/editor/arrange';
+import { withTidyLayout } from '@/lib/editor/tidy';
 import { emptyTopology, editorStore } from '@/lib/editor/store';
 import { clearWorkingCopy, defaultStorage, readWorkingCopy, type WorkingCopy } from '@/lib/editor/working-copy';
 
@@ -25,13 +23,6 @@ export type SessionState =
   | { status: 'error'; message: string; retry: () => void }
   | { status: 'restore'; copy: WorkingCopy; serverDoc: Topology; latest: number | null }
   | { status: 'ready'; layoutFixed: boolean; restored: boolean };
-
-export function withTidyLayout(doc: Topology): { doc: Topology; fixed: boolean } {
-  if (doc.devices.length === 0) return { doc, fixed: false };
-  const unplaced = doc.devices.some((d) => !doc.layout?.[d.id]);
-  if (!unplaced && overlappingDevices(buildSnapshot(doc)).length === 0) return { doc, fixed: false };
-  return { doc: { ...doc, layout: computeArrangement(doc) }, fixed: true };
-}
 
 export function useEditorSession(designId: number) {
   const me = useMe();

@@ -1,5 +1,5 @@
 import { useEffect, useRef } from 'react';
-import { actionFor, type ShortcutAction } from '@/components/editor/shortcuts';
+import { actionFor, type ShortcutAction } from '@/lib/editor/shortcuts';
 
 /** Typing in a field keeps its keys: Backspace edits text there, it does not delete a device. */
 function typing(target: EventTarget | null): boolean {

@@ -16,6 +16,9 @@ export function Shell({ user, teamName, children }: ShellProps) {
   const pathname = usePathname();
   const items = navItemsFor(user.role);
   const active = activeNavKey(pathname);
+  // On a phone the canvas editor takes the whole screen; its own bar has the way back. The bars
+  // give way to null, not to another tree, so the Slot below keeps its place and stays mounted.
+  const immersive = /^\/designs\/[^/]+\/edit\/?$/.test(pathname);
   if (width >= WIDE_BREAKPOINT) {
     return (
       <View style={styles.wide} testID="shell-wide">
@@ -28,11 +31,11 @@ export function Shell({ user, teamName, children }: ShellProps) {
   }
   return (
     <View style={styles.narrow} testID="shell-narrow">
-      <TopBar user={user} teamName={teamName} />
+      {immersive ? null : <TopBar user={user} teamName={teamName} />}
       <View style={styles.main} role="main">
         {children}
       </View>
-      <TabBar items={items} active={active} />
+      {immersive ? null : <TabBar items={items} active={active} />}
     </View>
   );
 }

@@ -1,0 +1,105 @@
+import { analyze } from '@/shared/analysis/analyze';
+import { harborRoadV1, harborRoadV2 } from '@/shared/fixtures/harbor-road';
+import { addressRows } from '@/lib/editor/address-rows';
+import { runCommand } from '@/lib/editor/commands';
+import { focusOn } from '@/lib/editor/focus';
+import { buildSnapshot, overlappingDevices, rectsIntersect } from '@/lib/editor/geometry';
+import { computeMarks, EMPTY_MARKS } from '@/lib/editor/marks';
+import { placeInView } from '@/lib/editor/placement';
+import { actionFor } from '@/lib/editor/shortcuts';
+import { withTidyLayout } from '@/lib/editor/tidy';
+import { apply, smallDesign } from '@/tests/lib/editor/helpers/editor';
+
+const key = (key: string, mods: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }> = {}) => ({ key, ctrlKey: false, metaKey: false, shiftKey: false, altKey: false, ...mods });
+
+describe('placing a palette device', () => {
+  it('puts it in the middle of the view when that is free, and beside what is there when not', () => {
+    const doc = smallDesign();
+    const snapshot = buildSnapshot(doc);
+    const empty = placeInView(doc, snapshot, { template: 'host' }, { x: 2000, y: 2000, width: 800, height: 600 })!;
+    expect(empty.x).toBeGreaterThan(2000);
+    expect(empty.y).toBeGreaterThan(2000);
+    const crowded = placeInView(doc, snapshot, { template: 'host' }, { x: 0, y: 0, width: 900, height: 700 })!;
+    const next = runCommand(doc, 'addDevice', { template: 'host', position: crowded });
+    expect(overlappingDevices(buildSnapshot(next))).toEqual([]);
+  });
+});
+
+describe('opening a layout that overlaps on this canvas', () => {
+  it('re-arranges the demo’s pattern layout and leaves a tidy one alone', () => {
+    const demo = harborRoadV2();
+    expect(overlappingDevices(buildSnapshot(demo)).length).toBeGreaterThan(0);
+    const tidy = withTidyLayout(demo);
+    expect([tidy.fixed, overlappingDevices(buildSnapshot(tidy.doc))]).toEqual([true, []]);
+    expect(tidy.doc.devices).toBe(demo.devices);
+    const again = withTidyLayout(tidy.doc);
+    expect([again.fixed, again.doc]).toEqual([false, tidy.doc]);
+  });
+});
+
+describe('focusing a finding', () => {
+  it('selects the subjects the canvas shows and brings them all on screen', () => {
+    const doc = withTidyLayout(harborRoadV1()).doc;
+    const report = analyze(doc);
+    const spof = report.findings.find((f) => f.rule === 'single-point-of-failure')!;
+    const snapshot = buildSnapshot(doc);
+    const screen = { width: 800, height: 600 };
+    const focus = focusOn(snapshot, [...spof.subjects, 'net-unknown'], { x: 5000, y: 5000, zoom: 1 }, screen);
+    expect(focus.selection).toEqual(spof.subjects);
+    const v = focus.viewport!;
+    const view = { x: v.x, y: v.y, width: screen.width / v.zoom, height: screen.height / v.zoom };
+    for (const id of ['cam-rec-2', 'fab-a']) expect(rectsIntersect(snapshot.devices.get(id)!.rect, view)).toBe(true);
+  });
+});
+
+describe('keyboard shortcuts', () => {
+  it('maps the keys the help sheet lists', () => {
+    expect([
+      actionFor(key('z', { ctrlKey: true })),
+      actionFor(key('Z', { ctrlKey: true, shiftKey: true })),
+      actionFor(key('y', { metaKey: true })),
+      actionFor(key('Delete')),
+      actionFor(key('Backspace')),
+      actionFor(key('A', { shiftKey: true })),
+      actionFor(key('a')),
+      actionFor(key('f')),
+      actionFor(key('+')),
+      actionFor(key('-')),
+      actionFor(key('Escape')),
+      actionFor(key('s', { ctrlKey: true })),
+      actionFor(key('f', { altKey: true })),
+    ]).toEqual(['undo', 'redo', 'redo', 'delete', 'delete', 'arrange', null, 'fit', 'zoomIn', 'zoomOut', 'escape', 'save', null]);
+  });
+});
+
+describe('the address table', () => {
+  it('lists host and controller ports only, with the report’s conflicts', () => {
+    let doc = harborRoadV2();
+    const first = addressRows(doc, EMPTY_MARKS);
+    expect(first.every((r) => !r.deviceId.startsWith('fab-') && r.deviceId !== 'oob-1')).toBe(true);
+    // Two ports on one address: the analysis's address-duplicate names both.
+    const [a, b] = first.filter((r) => r.address !== '' && r.network === 'fabric A');
+    doc = apply(doc, 'setPort', { id: b.portId, address: { mode: 'static', ip: a.address } });
+    const rows = addressRows(doc, computeMarks(doc, analyze(doc)), 'problems');
+    expect(rows.map((r) => [r.portId, r.problems.map((f) => f.rule)])).toEqual([
+      [a.portId, ['address-duplicate']],
+      [b.portId, ['address-duplicate']],
+    ]);
+    expect(addressRows(doc, EMPTY_MARKS, 'all', 'cam-rec-2').every((r) => r.device === 'cam-rec-2')).toBe(true);
+  });
+});
+
+describe('putting ports on a network in one step', () => {
+  it('moves every given port and drops static addresses that do not fit', () => {
+    const doc = harborRoadV2();
+    const mgmt = doc.networks.find((n) => n.purpose === 'management')!;
+    const ports = addressRows(doc, EMPTY_MARKS).filter((r) => r.network === 'fabric A').slice(0, 2);
+    const next = apply(doc, 'assignNetwork', { portIds: ports.map((p) => p.portId), networkId: mgmt.id });
+    const after = addressRows(next, EMPTY_MARKS).filter((r) => ports.some((p) => p.portId === r.portId));
+    // 198.51.100.x is outside 192.0.2.0/24 (RFC 5737 ranges), so those addresses go.
+    expect(after.map((r) => [r.network, r.address])).toEqual([
+      ['management', ''],
+      ['management', ''],
+    ]);
+  });
+});
