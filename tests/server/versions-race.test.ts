@@ -97,4 +97,14 @@ describe('two saves racing on the same base version', () => {
     // The submit, then exactly the one decision that won.
     expect(events.map((e) => e.action)).toEqual(['submit', winner?.body.review.events[1].action]);
   });
+
+  it('stays answering under a burst of writers and readers at once: every request succeeds, numbers stay consecutive', async () => {
+    const theo = await signInAs(t.app, 'reviewer');
+    const writes = Array.from({ length: 8 }, (_, i) => (i % 2 ? ravi : maya).post(`/api/designs/${id}/versions/1/restore`).send({ message: `Burst ${i}` }));
+    const reads = Array.from({ length: 16 }, (_, i) => [ravi, maya, theo][i % 3].get(i % 2 ? '/api/designs' : `/api/designs/${id}`));
+    const answers = await Promise.all([...writes, ...reads]);
+    expect(answers.slice(0, 8).map((a) => a.status)).toEqual(Array(8).fill(201));
+    expect(answers.slice(8).map((a) => a.status)).toEqual(Array(16).fill(200));
+    expect(await numbers()).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10]);
+  });
 });
