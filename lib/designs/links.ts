@@ -27,7 +27,7 @@ export function diffHref(id: number, from: number, to: number): Href {
   return { pathname: '/designs/[id]/diff', params: { id, from, to } };
 }
 
-/** Typed loosely on purpose: the route file does not exist until the canvas lands (EDITOR_READY). */
+/** Typed loosely on purpose: the canvas owns this route, and generated route types may lag behind it. */
 export function editorHref(id: number): Href {
   return `/designs/${id}/edit` as Href;
 }

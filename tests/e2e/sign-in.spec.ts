@@ -8,7 +8,7 @@ test.describe('signing in', () => {
       await expect(page).toHaveURL(/\/sign-in/);
       await fillSignIn(page, account.email);
       await expect(page).toHaveURL(/\/designs$/);
-      await expect(page.getByTestId('designs-empty')).toBeVisible();
+      await expect(page.getByTestId('designs-screen')).toBeVisible();
       await expectShell(page, testInfo);
       await expect(page.getByTestId('team-name')).toHaveText(DEMO_TEAM);
       await expect(page.getByTestId('signed-in-user')).toContainText(account.name);
