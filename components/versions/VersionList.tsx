@@ -38,7 +38,7 @@ export function VersionList({ designId, versions, selected, onSelect, renderSele
             selected={version.number === selected}
             onSelect={() => onSelect(version.number)}
             comparing={picked.includes(version.number)}
-            onCompare={(on) => toggle(version.number, on)}
+            onCompare={versions.length > 1 ? (on) => toggle(version.number, on) : undefined}
           >
             {renderSelected && version.number === selected ? renderSelected(version) : null}
           </VersionRow>

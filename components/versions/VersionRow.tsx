@@ -11,7 +11,8 @@ type VersionRowProps = {
   selected: boolean;
   onSelect: () => void;
   comparing: boolean;
-  onCompare: (on: boolean) => void;
+  /** Absent when there is nothing to compare with (a single version). */
+  onCompare?: (on: boolean) => void;
   /** On a phone the selected version's details open right under its row. */
   children?: ReactNode;
 };
@@ -23,8 +24,7 @@ export function VersionRow({ version, selected, onSelect, comparing, onCompare, 
     <View role="listitem" style={[styles.row, selected && styles.selected]} testID={tid}>
       <Pressable
         role="button"
-        aria-expanded={selected}
-        aria-label={`Version ${version.number}: ${version.message}`}
+        {...currentMark(selected)}
         onPress={onSelect}
         style={({ pressed }) => [styles.press, pressed && styles.pressed]}
         testID={`${tid}-open`}
@@ -44,10 +44,15 @@ export function VersionRow({ version, selected, onSelect, comparing, onCompare, 
         </Text>
         <SummaryLine summary={version.summary} testID={`${tid}-summary`} />
       </Pressable>
-      <Checkbox label={`Compare version ${version.number}`} checked={comparing} onChange={onCompare} testID={`${tid}-compare`} />
+      {onCompare ? <Checkbox label={`Compare version ${version.number}`} checked={comparing} onChange={onCompare} testID={`${tid}-compare`} /> : null}
       {children}
     </View>
   );
+}
+
+/** The shown version is the current one of the list (aria-current on the web; React Native's types lack it). */
+function currentMark(selected: boolean): object {
+  return { 'aria-current': selected ? 'true' : undefined };
 }
 
 const styles = StyleSheet.create({
