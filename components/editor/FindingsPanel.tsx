@@ -27,6 +27,15 @@ export function FindingsPanel({ onFocused }: { onFocused?: () => void }) {
   const [filter, setFilter] = useState<Filter>('all');
   const [limit, setLimit] = useState(PAGE);
   const findings = useMemo(() => (report?.findings ?? []).filter((f) => filter === 'all' || f.severity === filter), [report, filter]);
+  // Test ids count within each rule: the second single point of failure is finding-single-point-of-failure-1.
+  const ordinals = useMemo(() => {
+    const seen = new Map<string, number>();
+    return findings.map((f) => {
+      const n = seen.get(f.rule) ?? 0;
+      seen.set(f.rule, n + 1);
+      return n;
+    });
+  }, [findings]);
   const counts = useMemo(() => {
     const c = { error: 0, warning: 0, info: 0 };
     for (const f of report?.findings ?? []) c[f.severity] += 1;
@@ -63,7 +72,7 @@ export function FindingsPanel({ onFocused }: { onFocused?: () => void }) {
       />
       {report && findings.length === 0 ? <Text variant="small">Nothing to report here.</Text> : null}
       {findings.slice(0, limit).map((finding, i) => (
-        <Pressable key={`${finding.rule}:${finding.subjects.join(',')}:${i}`} role="button" aria-label={`Show: ${finding.message}`} onPress={() => focus(finding)} style={({ pressed }) => [styles.item, pressed && styles.pressed]} testID={`finding-${finding.rule}-${i}`}>
+        <Pressable key={`${finding.rule}:${finding.subjects.join(',')}:${i}`} role="button" aria-label={`Show: ${finding.message}`} onPress={() => focus(finding)} style={({ pressed }) => [styles.item, pressed && styles.pressed]} testID={`finding-${finding.rule}-${ordinals[i]}`}>
           <FindingLine finding={finding} />
           {finding.subjects.length > 0 ? (
             <Text variant="caption" color="inkMuted" numberOfLines={2}>

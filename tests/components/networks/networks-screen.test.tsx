@@ -1,0 +1,63 @@
+import { act, fireEvent, render, screen } from '@testing-library/react-native';
+import { harborRoadV2 } from '@/shared/fixtures/harbor-road';
+import { analyseNow, liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { editorStore } from '@/lib/editor/store';
+import { NetworksScreen } from '@/components/networks/NetworksScreen';
+
+const doc = () => editorStore.getState().doc;
+
+beforeEach(() => {
+  editorStore.getState().load(harborRoadV2(), { designId: 1, baseVersion: 2 });
+  analyseNow(liveAnalysisStore, doc());
+});
+
+describe('networks and addresses', () => {
+  it('refuses a network without a prefix length under the field, and adds a valid one', () => {
+    render(<NetworksScreen wide />);
+    fireEvent.changeText(screen.getByTestId('add-network-name'), 'fabric C');
+    fireEvent.changeText(screen.getByTestId('add-network-cidr'), '198.51.100.128');
+    fireEvent.press(screen.getByTestId('add-network-submit'));
+    expect(screen.getByTestId('add-network-cidr-error')).toHaveTextContent(/prefix length/);
+    expect(doc().networks).toHaveLength(3);
+    // A documentation block (RFC 3849) so it overlaps nothing of the demo's.
+    fireEvent.changeText(screen.getByTestId('add-network-cidr'), '2001:db8:c::/64');
+    fireEvent.changeText(screen.getByTestId('add-network-vlan'), '130');
+    fireEvent.press(screen.getByTestId('add-network-submit'));
+    expect(doc().networks.map((n) => [n.name, n.cidr, n.vlan])).toContainEqual(['fabric C', '2001:db8:c::/64', 130]);
+  });
+
+  it('saves a VLAN outside 1–4094 and shows the analysis’s finding under the field', () => {
+    render(<NetworksScreen wide />);
+    const id = doc().networks[0].id;
+    // IEEE 802.1Q: 0 and 4095 are reserved, so 4095 is a finding.
+    fireEvent.changeText(screen.getByTestId(`network-${id}-vlan`), '4095');
+    fireEvent(screen.getByTestId(`network-${id}-vlan`), 'blur');
+    expect(doc().networks[0].vlan).toBe(4095);
+    act(() => analyseNow(liveAnalysisStore, doc()));
+    expect(screen.getByTestId(`network-${id}-vlan-error`)).toHaveTextContent(/4095/);
+  });
+
+  it('flags a duplicate address in the table with words and an icon, from the report', () => {
+    const [a, b] = ['wms-db-1.card-1.p1', 'wms-db-2.card-1.p1'];
+    const ip = '198.51.100.5';
+    act(() => {
+      editorStore.getState().run('setPort', { id: b, address: { mode: 'static', ip } });
+      analyseNow(liveAnalysisStore, doc());
+    });
+    render(<NetworksScreen wide />);
+    fireEvent.press(screen.getByTestId('address-filter-problems'));
+    expect(screen.getByTestId(`address-status-${a}`)).toHaveTextContent(new RegExp(`Duplicate: ${ip.replace(/\./g, '\\.')} is used by`));
+    expect(screen.getByTestId(`address-status-${b}`)).toHaveTextContent(/Duplicate/);
+  });
+
+  it('auto-assigns the ports that are on a network and have no address', () => {
+    act(() => {
+      editorStore.getState().run('clearAddresses', {});
+    });
+    render(<NetworksScreen wide />);
+    fireEvent.press(screen.getByTestId('networks-assign-all'));
+    const addressed = doc().devices.flatMap((d) => (d.kind === 'switch' ? [] : (d.kind === 'array' ? d.controllers : d.adapters).flatMap((g) => g.ports))).filter((p) => p.networkId);
+    expect(addressed.every((p) => p.address?.mode === 'static')).toBe(true);
+    expect(editorStore.temporal.getState().pastStates).toHaveLength(2);
+  });
+});
