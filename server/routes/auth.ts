@@ -12,7 +12,7 @@ export function authRoutes({ auth }: Services): Router {
   const router = Router();
   const signIn = validate({ body: signInBody });
 
-  router.post('/sign-in', signInLimiter(), signIn, async (req, res) => {
+  router.post('/sign-in', ...signInLimiter(), signIn, async (req, res) => {
     const result = await auth.signIn(signIn.input(req).body);
     if (result.ok) await startSession(req, result.value.id);
     reply(res, result, 200, (user) => ({ user }));

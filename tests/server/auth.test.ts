@@ -121,6 +121,28 @@ describe('sign-in rate limit', () => {
     for (let i = 0; i < 5; i++) expect((await wrong()).status).toBe(401);
     expect((await wrong()).status).toBe(429);
   });
+
+  it('lets a whole team behind one address sign in at the same moment', async () => {
+    const roles = ['admin', 'designer', 'reviewer', 'installer'] as const;
+    const attempts = [...roles, ...roles].map((role) =>
+      request(t.app).post('/api/auth/sign-in').send({ email: DEMO[role], password: DEMO_PASSWORD }),
+    );
+    const statuses = (await Promise.all(attempts)).map((res) => res.status);
+    expect(statuses).toEqual(Array(8).fill(200));
+  });
+
+  it('counts wrong passwords per account, so one locked account does not lock out the others', async () => {
+    for (let i = 0; i < 6; i++) await wrong();
+    expect((await wrong()).status).toBe(429);
+    await request(t.app).post('/api/auth/sign-in').send({ email: DEMO.designer, password: DEMO_PASSWORD }).expect(200);
+  });
+
+  it('stops one address guessing across many accounts after 30 failures', async () => {
+    const guess = (i: number) =>
+      request(t.app).post('/api/auth/sign-in').send({ email: `nobody-${i}@tidewater.example`, password: 'guess-guess-guess' });
+    for (let i = 0; i < 30; i++) expect((await guess(i)).status).toBe(401);
+    expect((await guess(30)).status).toBe(429);
+  });
 });
 
 describe('under production settings', () => {
