@@ -10,6 +10,8 @@ import type { DataPathGraph, NodeKind } from '@/shared/analysis/graph';
 export type CompiledGraph = {
   ids: string[];
   kinds: NodeKind[];
+  /** 1 where the node is a failure unit (controller, cable, switch, card), else 0. */
+  isUnit: Uint8Array;
   indexOf: Map<string, number>;
   offsets: Int32Array;
   targets: Int32Array;
@@ -24,6 +26,7 @@ export function compileGraph(graph: DataPathGraph): CompiledGraph {
   const indexOf = new Map<string, number>();
   ids.forEach((id, i) => indexOf.set(id, i));
   const kinds = ids.map((id) => graph.node(id).kind);
+  const isUnit = Uint8Array.from(kinds, (kind) => (kind === 'array' || kind === 'host' ? 0 : 1));
   const networkCode = new Map<string, number>();
   const offsets = new Int32Array(ids.length + 1);
   const targets = new Int32Array(graph.edgeCount());
@@ -44,5 +47,5 @@ export function compileGraph(graph: DataPathGraph): CompiledGraph {
     }
   }
   offsets[ids.length] = e;
-  return { ids, kinds, indexOf, offsets, targets, edgeNetwork, networkCode };
+  return { ids, kinds, isUnit, indexOf, offsets, targets, edgeNetwork, networkCode };
 }

@@ -3,22 +3,25 @@ import { byId, type AnalysisContext } from '@/shared/analysis/context';
 import { ANY_NETWORK, compileGraph, type CompiledGraph } from '@/shared/analysis/compile';
 import { DominatorSolver, type DominatorRun } from '@/shared/analysis/dominators';
 import { buildDataPathGraph } from '@/shared/analysis/graph';
-import { countSessions } from '@/shared/analysis/sessions';
-import type { FailureResult, HostArrayResult, UnitKind } from '@/shared/analysis/types';
+import { countSessions, type SessionTable } from '@/shared/analysis/sessions';
+import type { FailureResult, HostArrayPair, HostArrayResult, UnitKind } from '@/shared/analysis/types';
 import type { ArrayDevice } from '@/shared/topology/schema';
 
 /**
  * hosts[] and failures[]. For every array a and every network n its controller ports use, one
  * dominator run over the core data-path graph rooted at a, following only the edges of n (and
  * edges of no network); the hosts' dominators then follow from their attachments (attachments.ts).
- * A failure unit u cuts host h off array a when, on every network where h reaches a, u dominates h:
- * then no pair of ports that could form a session survives u's loss. The cost is one near-linear
- * pass per (array, network) plus the dominator chains read back, instead of one search per unit.
+ *
+ * The dominators of a node are the chain of its ancestors in the dominator tree, so the units
+ * shared by every attachment of a host are the dominator chain of the attachments' upstream
+ * nodes' lowest common ancestor in that tree, plus the card when every attachment uses the same
+ * card and the cable when there is only one. A failure unit u cuts host h off array a when, on
+ * every network where h reaches a, u dominates h: then no pair of ports that could form a session
+ * survives u's loss. The cost is one near-linear pass per (array, network) plus one climb of the
+ * tree per attachment, instead of one search per unit.
  */
-const UNIT_KINDS = new Set(['cable', 'adapter', 'switch', 'controller']);
 /** A network no core edge carries: such a run follows only edges of no network. */
 const UNUSED_NETWORK = -2;
-const SMALL = 16;
 
 /** The networks to run for one array: those its controller ports use, or all of them if a port has none. */
 function networksOf(ctx: AnalysisContext, array: ArrayDevice): (string | null)[] {
@@ -42,24 +45,7 @@ function passes(network: string | undefined, key: string | null): boolean {
 }
 
 function intersect(a: string[], b: string[]): string[] {
-  if (b.length > SMALL) {
-    const set = new Set(b);
-    return a.filter((x) => set.has(x));
-  }
   return a.filter((x) => b.includes(x));
-}
-
-/** The failure units among a fabric node and its dominators, memoised per run. */
-function fabricChain(graph: CompiledGraph, run: DominatorRun, node: number, memo: Map<number, string[]>): string[] {
-  const cached = memo.get(node);
-  if (cached) return cached;
-  const chain: string[] = [];
-  for (let d = run.numberOf[node]; d > 0; d = run.idom[d]) {
-    const id = run.nodes[d];
-    if (UNIT_KINDS.has(graph.kinds[id])) chain.push(graph.ids[id]);
-  }
-  memo.set(node, chain);
-  return chain;
 }
 
 /** Attachments grouped by host, with their upstream node resolved once for every run. */
@@ -77,88 +63,147 @@ function groupByHost(graph: CompiledGraph, attachments: Attachment[]): HostGroup
   const items: Attachment[] = [];
   hosts.forEach((host, h) => {
     start[h] = items.length;
-    items.push(...order.get(host)!);
+    for (const att of order.get(host)!) items.push(att);
   });
   start[hosts.length] = items.length;
   const upstream = Int32Array.from(items, (att) => graph.indexOf.get(att.upstream) ?? -1);
   return { hosts, start, items, upstream };
 }
 
-/** Per host (by group index): the units dominating it, one list per network on which it reaches the array. */
-function hostDominators(ctx: AnalysisContext, graph: CompiledGraph, groups: HostGroups, array: ArrayDevice) {
+/** One dominator run read as a tree: depths, and each node's failure units up to the root, memoised. */
+class DominatorTree {
+  private readonly depth: Int32Array;
+  private readonly chains: (string[] | undefined)[];
+
+  constructor(
+    private readonly graph: CompiledGraph,
+    readonly run: DominatorRun,
+  ) {
+    // An immediate dominator is a DFS-tree ancestor, so it has the smaller preorder number.
+    this.depth = new Int32Array(run.count);
+    for (let v = 1; v < run.count; v += 1) this.depth[v] = this.depth[run.idom[v]] + 1;
+    this.chains = new Array(run.count);
+  }
+
+  lowestCommonAncestor(x: number, y: number): number {
+    const { idom } = this.run;
+    let a = x;
+    let b = y;
+    while (this.depth[a] > this.depth[b]) a = idom[a];
+    while (this.depth[b] > this.depth[a]) b = idom[b];
+    while (a !== b) {
+      a = idom[a];
+      b = idom[b];
+    }
+    return a;
+  }
+
+  /** The failure units among v and its dominators (preorder numbers), shared by every caller. */
+  units(v: number): string[] {
+    const cached = this.chains[v];
+    if (cached) return cached;
+    const chain: string[] = [];
+    for (let d = v; d > 0; d = this.run.idom[d]) {
+      const node = this.run.nodes[d];
+      if (this.graph.isUnit[node]) chain.push(this.graph.ids[node]);
+    }
+    this.chains[v] = chain;
+    return chain;
+  }
+}
+
+/**
+ * Per host (by group index): the units whose loss alone cuts it off the array on every network
+ * where it reaches it, or undefined when it reaches the array on none.
+ */
+function hostDominators(ctx: AnalysisContext, graph: CompiledGraph, groups: HostGroups, array: ArrayDevice): (string[] | undefined)[] {
   const solver = new DominatorSolver(graph);
   const root = graph.indexOf.get(array.id)!;
-  const perHost: (string[][] | undefined)[] = new Array(groups.hosts.length);
+  const result: (string[] | undefined)[] = new Array(groups.hosts.length);
   for (const key of networksOf(ctx, array)) {
     const code = key === null ? ANY_NETWORK : graph.networkCode.get(key) ?? UNUSED_NETWORK;
-    const run = solver.run(root, code);
-    const memo = new Map<number, string[]>();
+    const tree = new DominatorTree(graph, solver.run(root, code));
+    const numberOf = tree.run.numberOf;
     for (let h = 0; h < groups.hosts.length; h += 1) {
-      let units: string[] | undefined;
+      const sofar = result[h];
+      if (sofar && sofar.length === 0) continue; // nothing left to intersect away
+      let meet = -1;
+      let card: string | null | undefined;
+      let cable: string | undefined;
+      let count = 0;
       for (let i = groups.start[h]; i < groups.start[h + 1]; i += 1) {
-        const upstream = groups.upstream[i];
         const att = groups.items[i];
-        if (upstream < 0 || run.numberOf[upstream] < 0) continue;
+        const upstream = groups.upstream[i];
+        if (upstream < 0 || numberOf[upstream] < 0) continue;
         if (!passes(att.hostNetwork, key) || !passes(att.controllerNetwork, key)) continue;
-        const chain = [att.adapter, att.cable, ...fabricChain(graph, run, upstream, memo)];
-        units = units ? intersect(units, chain) : chain;
+        meet = count === 0 ? numberOf[upstream] : tree.lowestCommonAncestor(meet, numberOf[upstream]);
+        card = count === 0 || card === att.adapter ? att.adapter : null;
+        cable = att.cable;
+        count += 1;
       }
-      if (!units) continue;
-      const list = perHost[h];
-      if (list) list.push(units);
-      else perHost[h] = [units];
+      if (count === 0) continue;
+      const here = tree.units(meet);
+      const own: string[] = [];
+      if (card) own.push(card);
+      if (count === 1) own.push(cable!);
+      const units = own.length > 0 ? [...own, ...here] : here;
+      result[h] = sofar ? intersect(sofar, units) : units;
     }
   }
-  return perHost;
+  return result;
 }
 
 export type Resilience = { hosts: HostArrayResult[]; failures: FailureResult[] };
-
-const byPair = (x: { host: string; array: string }, y: { host: string; array: string }) => byId(x.host, y.host) || byId(x.array, y.array);
-
-export function analyzeResilience(ctx: AnalysisContext): Resilience {
-  const graph = compileGraph(buildDataPathGraph(ctx));
-  const groups = groupByHost(graph, hostAttachments(ctx));
-  const sessions = countSessions(ctx);
-  const hosts: HostArrayResult[] = [];
-  const cuts = new Map<string, { host: string; array: string }[]>();
-  for (const device of ctx.doc.devices) {
-    if (device.kind !== 'array') continue;
-    const perHost = hostDominators(ctx, graph, groups, device);
-    for (let h = 0; h < groups.hosts.length; h += 1) {
-      const lists = perHost[h];
-      const host = groups.hosts[h];
-      const pair = lists && sessions.get(host)?.get(device.id);
-      if (!lists || !pair || pair.sessions === 0) continue;
-      const spof = lists.length === 1 ? lists[0] : lists.reduce(intersect);
-      spof.sort(byId);
-      for (const unit of spof) {
-        const list = cuts.get(unit);
-        if (list) list.push({ host, array: device.id });
-        else cuts.set(unit, [{ host, array: device.id }]);
-      }
-      hosts.push({
-        host,
-        array: device.id,
-        sessions: pair.sessions,
-        controllersReached: pair.controllers.slice().sort(byId),
-        singlePointsOfFailure: spof,
-        redundant: spof.length === 0,
-      });
-    }
-  }
-  hosts.sort(byPair);
-  const failures: FailureResult[] = [...cuts.keys()].sort(byId).map((unit) => ({
-    unit,
-    kind: unitKind(ctx, unit),
-    cutsOff: cuts.get(unit)!.sort(byPair),
-  }));
-  return { hosts, failures };
-}
 
 function unitKind(ctx: AnalysisContext, id: string): UnitKind {
   if (ctx.index.cables.has(id)) return 'cable';
   if (ctx.index.adapters.has(id)) return 'adapter';
   if (ctx.index.controllers.has(id)) return 'controller';
   return 'switch';
+}
+
+/** Indices of the ids in plain code-unit order. */
+function sortedOrder(ids: string[]): number[] {
+  return ids.map((_, i) => i).sort((x, y) => byId(ids[x], ids[y]));
+}
+
+function pairResult(host: string, array: string, spof: string[], sessions: SessionTable): HostArrayResult | null {
+  const pair = sessions.get(host)?.get(array);
+  if (!pair || pair.sessions === 0) return null;
+  const singlePointsOfFailure = spof.slice().sort(byId);
+  return {
+    host,
+    array,
+    sessions: pair.sessions,
+    controllersReached: pair.controllers.slice().sort(byId),
+    singlePointsOfFailure,
+    redundant: singlePointsOfFailure.length === 0,
+  };
+}
+
+export function analyzeResilience(ctx: AnalysisContext): Resilience {
+  const graph = compileGraph(buildDataPathGraph(ctx));
+  const groups = groupByHost(graph, hostAttachments(ctx));
+  const sessions = countSessions(ctx);
+  const arrays = ctx.doc.devices.filter((d): d is ArrayDevice => d.kind === 'array').sort((x, y) => byId(x.id, y.id));
+  const perArray = arrays.map((array) => hostDominators(ctx, graph, groups, array));
+  // Hosts, then arrays, in id order: hosts[] and every cutsOff list come out sorted as they are built.
+  const hosts: HostArrayResult[] = [];
+  const cuts = new Map<string, HostArrayPair[]>();
+  for (const h of sortedOrder(groups.hosts)) {
+    for (let a = 0; a < arrays.length; a += 1) {
+      const spof = perArray[a][h];
+      const result = spof && pairResult(groups.hosts[h], arrays[a].id, spof, sessions);
+      if (!result) continue;
+      hosts.push(result);
+      for (const unit of result.singlePointsOfFailure) {
+        const list = cuts.get(unit);
+        const cut = { host: result.host, array: result.array };
+        if (list) list.push(cut);
+        else cuts.set(unit, [cut]);
+      }
+    }
+  }
+  const failures: FailureResult[] = [...cuts.keys()].sort(byId).map((unit) => ({ unit, kind: unitKind(ctx, unit), cutsOff: cuts.get(unit)! }));
+  return { hosts, failures };
 }
