@@ -1,4 +1,4 @@
-import { dataCables, networksPair, type AnalysisContext } from '@/shared/analysis/context';
+import { dataCables, networksPair, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
 import type { PortRef } from '@/shared/topology/index';
 
 /**
@@ -8,9 +8,9 @@ import type { PortRef } from '@/shared/topology/index';
  * Data paths only ever run through data and shared switches, so two ports are joined exactly when
  * they are cabled to each other (direct attach) or cabled into the same cluster of switches joined
  * by inter-switch cables. Clusters come from a union–find over the switches (path halving); each
- * cluster keeps its controller ports, counted per array and network once, so a host port cabled
- * into one cluster costs one look-up per array. A host port with several cables (or a direct
- * cable) is counted pair by pair instead, so that no pair is counted twice.
+ * cluster keeps its controller ports, tallied once per network a host port may have, so a host
+ * port with one cable into a cluster costs one look-up per array. A host port with several cables
+ * (or a direct cable) is counted pair by pair instead, so that no pair is counted twice.
  */
 /** `controllers` holds each controller once; an array has at most four, so a list beats a set. */
 export type PairSessions = { sessions: number; controllers: string[] };
@@ -18,9 +18,8 @@ export type PairSessions = { sessions: number; controllers: string[] };
 /** Host id → array id → sessions and the controllers they reach. */
 export type SessionTable = Map<string, Map<string, PairSessions>>;
 
-type Tally = { count: number; controllers: string[] };
-/** array id → network id ('' for none) → how many controller ports, on which controllers. */
-type ClusterSummary = Map<string, Map<string, Tally>>;
+/** What one host port finds in one cluster, per array: how many controller ports, on which controllers. */
+type ArrayTally = { array: string; count: number; controllers: string[] };
 
 class UnionFind {
   private parent = new Map<string, string>();
@@ -40,36 +39,43 @@ class UnionFind {
   }
 }
 
-function push<T>(map: Map<string, T[]>, key: string, value: T): void {
-  const list = map.get(key);
-  if (list) list.push(value);
-  else map.set(key, [value]);
+function addOnce(list: string[], id: string): void {
+  if (!list.includes(id)) list.push(id);
 }
 
-function summarise(ports: Map<string, PortRef>): ClusterSummary {
-  const summary: ClusterSummary = new Map();
+/** The controller ports of one cluster that a host port on `hostNet` pairs with, tallied per array. */
+function tallyFor(ctx: AnalysisContext, ports: Map<string, PortRef>, hostNet: string | undefined): ArrayTally[] {
+  const byArray = new Map<string, ArrayTally>();
   for (const cp of ports.values()) {
-    let byNetwork = summary.get(cp.device.id);
-    if (!byNetwork) summary.set(cp.device.id, (byNetwork = new Map()));
-    const key = cp.port.networkId ?? '';
-    let tally = byNetwork.get(key);
-    if (!tally) byNetwork.set(key, (tally = { count: 0, controllers: [] }));
+    if (!networksPair(ctx, hostNet, cp.port.networkId)) continue;
+    let tally = byArray.get(cp.device.id);
+    if (!tally) byArray.set(cp.device.id, (tally = { array: cp.device.id, count: 0, controllers: [] }));
     tally.count += 1;
     addOnce(tally.controllers, cp.controller!.id);
   }
-  return summary;
+  return [...byArray.values()];
 }
 
-function pairEntry(table: SessionTable, host: string, array: string): PairSessions {
-  let arrays = table.get(host);
-  if (!arrays) table.set(host, (arrays = new Map()));
-  let pair = arrays.get(array);
-  if (!pair) arrays.set(array, (pair = { sessions: 0, controllers: [] }));
-  return pair;
+class Table {
+  readonly sessions: SessionTable = new Map();
+  add(host: string, array: string, count: number, controllers: readonly string[]): void {
+    let arrays = this.sessions.get(host);
+    if (!arrays) this.sessions.set(host, (arrays = new Map()));
+    let pair = arrays.get(array);
+    if (!pair) arrays.set(array, (pair = { sessions: 0, controllers: [] }));
+    pair.sessions += count;
+    for (const c of controllers) addOnce(pair.controllers, c);
+  }
 }
 
-function addOnce(list: string[], id: string): void {
-  if (!list.includes(id)) list.push(id);
+type EndVisitor = (here: PortRef, role: EndRole, there: PortRef, thereRole: EndRole) => void;
+
+/** Every data cable seen from each of its two ends. */
+function forEachEnd(cables: DataCableEnds[], visit: EndVisitor): void {
+  for (const ends of cables) {
+    visit(ends.a, ends.roleA, ends.b, ends.roleB);
+    visit(ends.b, ends.roleB, ends.a, ends.roleA);
+  }
 }
 
 export function countSessions(ctx: AnalysisContext): SessionTable {
@@ -79,46 +85,37 @@ export function countSessions(ctx: AnalysisContext): SessionTable {
     if (ends.roleA === 'switch' && ends.roleB === 'switch') clusters.union(ends.a.device.id, ends.b.device.id);
   }
   const clusterPorts = new Map<string, Map<string, PortRef>>();
-  // For a host port: the far ends of its cables, a controller port or the cluster of a switch.
-  const hostLinks = new Map<string, { hostPort: PortRef; links: (PortRef | string)[] }>();
-  for (const ends of cables) {
-    for (const [here, role, there, thereRole] of [
-      [ends.a, ends.roleA, ends.b, ends.roleB],
-      [ends.b, ends.roleB, ends.a, ends.roleA],
-    ] as const) {
-      if (role === 'controller' && thereRole === 'switch') {
-        const cluster = clusters.find(there.device.id);
-        if (!clusterPorts.has(cluster)) clusterPorts.set(cluster, new Map());
-        clusterPorts.get(cluster)!.set(here.port.id, here);
-      }
-      if (role === 'host') {
-        const entry = hostLinks.get(here.port.id) ?? { hostPort: here, links: [] };
-        entry.links.push(thereRole === 'switch' ? clusters.find(there.device.id) : there);
-        hostLinks.set(here.port.id, entry);
-      }
+  forEachEnd(cables, (here, role, there, thereRole) => {
+    if (role !== 'controller' || thereRole !== 'switch') return;
+    const cluster = clusters.find(there.device.id);
+    let ports = clusterPorts.get(cluster);
+    if (!ports) clusterPorts.set(cluster, (ports = new Map()));
+    ports.set(here.port.id, here);
+  });
+  const table = new Table();
+  // Host ports with a single cable into a cluster, the common case: one tally per (cluster, network).
+  const tallies = new Map<string, Map<string | undefined, ArrayTally[]>>();
+  // Every other host port: the far ends of its data cables, a controller port or a cluster.
+  const several = new Map<string, { hostPort: PortRef; links: (PortRef | string)[] }>();
+  forEachEnd(cables, (here, role, there, thereRole) => {
+    if (role !== 'host') return;
+    const link = thereRole === 'switch' ? clusters.find(there.device.id) : there;
+    if (typeof link === 'string' && ctx.index.cablesByPort.get(here.port.id)!.length === 1) {
+      const ports = clusterPorts.get(link);
+      if (!ports) return;
+      let byNetwork = tallies.get(link);
+      if (!byNetwork) tallies.set(link, (byNetwork = new Map()));
+      const hostNet = ctx.hasNetworks ? here.port.networkId : undefined;
+      let list = byNetwork.get(hostNet);
+      if (!list) byNetwork.set(hostNet, (list = tallyFor(ctx, ports, hostNet)));
+      for (const tally of list) table.add(here.device.id, tally.array, tally.count, tally.controllers);
+      return;
     }
-  }
-  const summaries = new Map<string, ClusterSummary>();
-  const table: SessionTable = new Map();
-  for (const { hostPort, links } of hostLinks.values()) {
-    const host = hostPort.device.id;
-    const only = links.length === 1 ? links[0] : undefined;
-    if (typeof only === 'string') {
-      const ports = clusterPorts.get(only);
-      if (!ports) continue;
-      let summary = summaries.get(only);
-      if (!summary) summaries.set(only, (summary = summarise(ports)));
-      const net = ctx.hasNetworks ? hostPort.port.networkId : undefined;
-      for (const [array, byNetwork] of summary) {
-        for (const [key, tally] of byNetwork) {
-          if (net !== undefined && key !== '' && key !== net) continue;
-          const pair = pairEntry(table, host, array);
-          pair.sessions += tally.count;
-          for (const c of tally.controllers) addOnce(pair.controllers, c);
-        }
-      }
-      continue;
-    }
+    const entry = several.get(here.port.id);
+    if (entry) entry.links.push(link);
+    else several.set(here.port.id, { hostPort: here, links: [link] });
+  });
+  for (const { hostPort, links } of several.values()) {
     const seen = new Set<string>();
     for (const link of links) {
       const candidates = typeof link === 'string' ? [...(clusterPorts.get(link)?.values() ?? [])] : [link];
@@ -126,11 +123,9 @@ export function countSessions(ctx: AnalysisContext): SessionTable {
         if (seen.has(cp.port.id)) continue;
         seen.add(cp.port.id);
         if (!networksPair(ctx, hostPort.port.networkId, cp.port.networkId)) continue;
-        const pair = pairEntry(table, host, cp.device.id);
-        pair.sessions += 1;
-        addOnce(pair.controllers, cp.controller!.id);
+        table.add(hostPort.device.id, cp.device.id, 1, [cp.controller!.id]);
       }
     }
   }
-  return table;
+  return table.sessions;
 }
