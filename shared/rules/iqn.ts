@@ -16,6 +16,8 @@ import { LIMITS } from '@/shared/rules/limits';
  */
 export type IscsiNameCheck = { ok: true; form: 'iqn' | 'eui' | 'naa'; folded: string } | { ok: false; reason: string };
 
+const PRINTABLE_ASCII = /^[\x20-\x7e]*$/;
+
 /** Stringprep table B.1: soft hyphen, joiners, variation selectors and the like map to nothing. */
 const MAPPED_TO_NOTHING = /[\u00AD\u034F\u1806\u180B-\u180D\u200B-\u200D\u2060\uFE00-\uFE0F\uFEFF]/gu;
 
@@ -24,6 +26,8 @@ const MAPPED_TO_NOTHING = /[\u00AD\u034F\u1806\u180B-\u180D\u200B-\u200D\u2060\u
  * one full fold it leaves out that a name might hold (ß → ss).
  */
 export function foldIscsiName(name: string): string {
+  // Printable ASCII, as nearly every name is: case folding is all the preparation it needs.
+  if (PRINTABLE_ASCII.test(name)) return name.toLowerCase();
   return name.replace(MAPPED_TO_NOTHING, '').toLowerCase().replace(/ß/g, 'ss').normalize('NFKC').toLowerCase();
 }
 
@@ -67,7 +71,7 @@ function checkIqn(folded: string): string | null {
 export function checkIscsiName(name: string): IscsiNameCheck {
   if (name.trim() !== name) return { ok: false, reason: 'it has spaces at its start or end' };
   const folded = foldIscsiName(name);
-  const bytes = new TextEncoder().encode(folded).length;
+  const bytes = PRINTABLE_ASCII.test(folded) ? folded.length : new TextEncoder().encode(folded).length;
   if (bytes > LIMITS.iscsiNameMaxBytes.value) {
     return { ok: false, reason: `it is ${bytes} bytes long; the limit is ${LIMITS.iscsiNameMaxBytes.value}` };
   }

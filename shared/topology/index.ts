@@ -73,6 +73,18 @@ export function* iteratePorts(doc: Topology): Generator<PortRef> {
   }
 }
 
+function portRef(port: Port, device: Device, controller: Controller | undefined, adapter: Adapter | undefined, d: number, g: number, p: number): PortRef {
+  // Every ref gets the same fields in the same order: one object shape for the engine, however
+  // many ports a design has.
+  return { port, device, controller, adapter, deviceIndex: d, groupIndex: g, portIndex: p };
+}
+
+function addCableEnd(index: TopologyIndex, portId: string, cable: Cable): void {
+  const list = index.cablesByPort.get(portId);
+  if (list) list.push(cable);
+  else index.cablesByPort.set(portId, [cable]);
+}
+
 export function indexTopology(doc: Topology): TopologyIndex {
   const index: TopologyIndex = {
     devices: new Map(),
@@ -83,36 +95,32 @@ export function indexTopology(doc: Topology): TopologyIndex {
     controllers: new Map(),
     adapters: new Map(),
   };
-  for (const device of doc.devices) {
-    index.devices.set(device.id, device);
-    if (device.kind === 'array') {
-      for (const controller of device.controllers) index.controllers.set(controller.id, { controller, array: device });
-    } else if (device.kind === 'host') {
-      for (const adapter of device.adapters) index.adapters.set(adapter.id, { adapter, host: device });
+  // Plain loops rather than iteratePorts: this runs on every analysis of every edit.
+  const { devices, ports } = index;
+  for (let d = 0; d < doc.devices.length; d += 1) {
+    const device = doc.devices[d];
+    devices.set(device.id, device);
+    if (device.kind === 'switch') {
+      for (let p = 0; p < device.ports.length; p += 1) ports.set(device.ports[p].id, portRef(device.ports[p], device, undefined, undefined, d, -1, p));
+    } else if (device.kind === 'array') {
+      for (let c = 0; c < device.controllers.length; c += 1) {
+        const controller = device.controllers[c];
+        index.controllers.set(controller.id, { controller, array: device });
+        for (let p = 0; p < controller.ports.length; p += 1) ports.set(controller.ports[p].id, portRef(controller.ports[p], device, controller, undefined, d, c, p));
+      }
+    } else {
+      for (let a = 0; a < device.adapters.length; a += 1) {
+        const adapter = device.adapters[a];
+        index.adapters.set(adapter.id, { adapter, host: device });
+        for (let p = 0; p < adapter.ports.length; p += 1) ports.set(adapter.ports[p].id, portRef(adapter.ports[p], device, undefined, adapter, d, a, p));
+      }
     }
   }
-  // Plain loops rather than iteratePorts: this runs on every analysis of every edit.
-  doc.devices.forEach((device, d) => {
-    if (device.kind === 'switch') {
-      device.ports.forEach((port, p) => index.ports.set(port.id, { port, device, deviceIndex: d, groupIndex: -1, portIndex: p }));
-    } else if (device.kind === 'array') {
-      device.controllers.forEach((controller, c) =>
-        controller.ports.forEach((port, p) => index.ports.set(port.id, { port, device, controller, deviceIndex: d, groupIndex: c, portIndex: p })),
-      );
-    } else {
-      device.adapters.forEach((adapter, a) =>
-        adapter.ports.forEach((port, p) => index.ports.set(port.id, { port, device, adapter, deviceIndex: d, groupIndex: a, portIndex: p })),
-      );
-    }
-  });
   for (const network of doc.networks) index.networks.set(network.id, network);
   for (const cable of doc.cables) {
     index.cables.set(cable.id, cable);
-    for (const end of [cable.a, cable.b]) {
-      const list = index.cablesByPort.get(end);
-      if (list) list.push(cable);
-      else index.cablesByPort.set(end, [cable]);
-    }
+    addCableEnd(index, cable.a, cable);
+    addCableEnd(index, cable.b, cable);
   }
   return index;
 }

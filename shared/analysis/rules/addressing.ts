@@ -23,13 +23,12 @@ function reservedWord(block: Cidr, ip: Ip): string {
   return ip.value === block.network ? 'the network address' : 'the broadcast address';
 }
 
-function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>): Finding[] {
+function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs: Map<string, Cidr>, out: Finding[]): void {
   const { port } = ref;
   const network = port.networkId ? ctx.index.networks.get(port.networkId) : undefined;
   // Cheap checks first: this runs for every port of every design, and most ports are fine.
-  if (!(cabled && (!network || !port.address)) && !(network && network.purpose !== port.role) && (port.address?.mode !== 'static' || !network)) return [];
+  if (!(cabled && (!network || !port.address)) && !(network && network.purpose !== port.role) && (port.address?.mode !== 'static' || !network)) return;
   const label = portLabel(ref);
-  const out: Finding[] = [];
   if (cabled && !network) {
     out.push({ rule: 'port-unaddressed', severity: 'warning', subjects: [port.id], message: `${label} is cabled but on no network.` });
   } else if (cabled && !port.address) {
@@ -43,12 +42,12 @@ function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs
       message: `${label} is a ${port.role} port on the ${network.purpose} network ${displayName(network)}; management and data must not share a subnet.`,
     });
   }
-  if (port.address?.mode !== 'static' || !network) return out;
+  if (port.address?.mode !== 'static' || !network) return;
   const ip = ipOf(ctx, port.address.ip);
   const block = cidrs.get(network.id);
-  if (!ip || !block) return out;
+  if (!ip || !block) return;
   const inside = containsIp(block, ip);
-  if (inside && !isReservedInBlock(block, ip)) return out;
+  if (inside && !isReservedInBlock(block, ip)) return;
   if (!inside) {
     out.push({
       rule: 'address-outside-network',
@@ -65,7 +64,6 @@ function portFindings(ctx: AnalysisContext, ref: PortRef, cabled: boolean, cidrs
       message: `${label} has ${port.address.ip}, ${what} of ${displayName(network)}.`,
     });
   }
-  return out;
 }
 
 function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Finding[] {
@@ -93,25 +91,40 @@ function gatewayFindings(ctx: AnalysisContext, cidrs: Map<string, Cidr>): Findin
   return out;
 }
 
-/** The same address on two ports, or a port on its network's gateway address. */
+/**
+ * The same address on two ports, or a port on its network's gateway address. Addresses compare by
+ * value per family (so 2001:DB8::1 and 2001:db8:0::1 are one address); only the first holder of
+ * each is remembered until a second turns up, since almost every address has one holder.
+ */
+function addressText(ctx: AnalysisContext, holder: string): string | undefined {
+  const address = ctx.index.ports.get(holder)?.port.address;
+  return address?.mode === 'static' ? address.ip : ctx.index.networks.get(holder)?.gateway;
+}
+
 function duplicateFindings(ctx: AnalysisContext): Finding[] {
-  const holders = new Map<string, { text: string; ids: string[] }>();
-  const add = (ip: string | undefined, holder: string) => {
-    const parsed = ip ? ipOf(ctx, ip) : null;
-    if (!parsed || !ip) return;
-    const key = ipKey(parsed);
-    const entry = holders.get(key);
+  const first = { ipv4: new Map<bigint, string>(), ipv6: new Map<bigint, string>() };
+  const shared = new Map<string, { text: string; ids: string[] }>();
+  const add = (text: string | undefined, holder: string) => {
+    const ip = text ? ipOf(ctx, text) : null;
+    if (!ip || !text) return;
+    const holders = first[ip.family];
+    const earlier = holders.get(ip.value);
+    if (earlier === undefined) {
+      holders.set(ip.value, holder);
+      return;
+    }
+    const key = ipKey(ip);
+    const entry = shared.get(key);
     if (entry) entry.ids.push(holder);
-    else holders.set(key, { text: ip, ids: [holder] });
+    else shared.set(key, { text: addressText(ctx, earlier) ?? text, ids: [earlier, holder] });
   };
   for (const network of ctx.doc.networks) add(network.gateway, network.id);
   for (const ref of ctx.index.ports.values()) {
     if (ref.port.address?.mode === 'static') add(ref.port.address.ip, ref.port.id);
   }
   const out: Finding[] = [];
-  for (const { text: ip, ids } of holders.values()) {
-    const ports = ids.filter((id) => ctx.index.ports.has(id));
-    if (ids.length < 2 || ports.length === 0) continue;
+  for (const { text: ip, ids } of shared.values()) {
+    if (!ids.some((id) => ctx.index.ports.has(id))) continue;
     const names = ids.map((id) => {
       const ref = ctx.index.ports.get(id);
       return ref ? portLabel(ref) : `the gateway of ${nameOf(ctx, id)}`;
@@ -126,7 +139,7 @@ export function addressingFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
   for (const ref of ctx.index.ports.values()) {
     if (ref.device.kind === 'switch') continue;
-    out.push(...portFindings(ctx, ref, ctx.index.cablesByPort.has(ref.port.id), cidrs));
+    portFindings(ctx, ref, ctx.index.cablesByPort.has(ref.port.id), cidrs, out);
   }
   out.push(...gatewayFindings(ctx, cidrs), ...duplicateFindings(ctx));
   return out;

@@ -32,7 +32,9 @@ export function namingFindings(ctx: AnalysisContext): Finding[] {
       });
       continue;
     }
-    byName.set(check.folded, [...(byName.get(check.folded) ?? []), device.id]);
+    const holders = byName.get(check.folded);
+    if (holders) holders.push(device.id);
+    else byName.set(check.folded, [device.id]);
   }
   for (const [name, hosts] of byName) {
     if (hosts.length < 2) continue;
