@@ -10,12 +10,12 @@ import express, { type Router } from 'express';
 export function webApp(webDir: string): Router {
   const router = express.Router();
   const index = path.join(webDir, 'index.html');
-  if (!existsSync(index)) {
-    router.get('/{*splat}', (_req, res) => {
-      res.status(404).type('text/plain').send('The web app is not built yet. Run `npm run build:web` or `npm start`.');
-    });
-    return router;
-  }
+  // Checked per request: a server started before `npm run build:web` finished serves the build once it exists.
+  router.use((req, res, next) => {
+    if (existsSync(index)) return next();
+    if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+    res.status(404).type('text/plain').send('The web app is not built yet. Run `npm run build:web` or `npm start`.');
+  });
   router.use(
     express.static(webDir, {
       index: false,

@@ -4,7 +4,7 @@ import { z } from 'zod';
 export type Issue = { path: string; message: string };
 
 /** The error body of every non-2xx API answer (api.md). */
-export type ApiError = { error: string; issues?: Issue[]; latestVersion?: number };
+export type ApiError = { error: string; issues?: Issue[]; latestVersion?: number | null };
 
 /** Turn zod issues into the API's `{path, message}` list. */
 export function toIssues(error: z.ZodError): Issue[] {

@@ -131,4 +131,18 @@ describe('serving the exported web app', () => {
       await bare.close();
     }
   });
+
+  it('serves the build once it appears, without a restart', async () => {
+    const later = mkdtempSync(path.join(tmpdir(), 'cw-web-later-'));
+    const early = await makeTestApp({ env: { WEB_DIR: later }, seed: false });
+    try {
+      await request(early.app).get('/designs').expect(404);
+      writeFileSync(path.join(later, 'index.html'), '<!doctype html><title>Built later</title>');
+      const res = await request(early.app).get('/designs').expect(200);
+      expect(res.text).toContain('Built later');
+    } finally {
+      await early.close();
+      rmSync(later, { recursive: true, force: true });
+    }
+  });
 });
