@@ -1,5 +1,6 @@
 import { analyze } from '@/shared/analysis/analyze';
 import { reachOf } from '@/shared/rules/cables';
+import { REACH } from '@/shared/rules/limits';
 import { checkIscsiName } from '@/shared/rules/iqn';
 import { LIMITS } from '@/shared/rules/limits';
 import type { Topology } from '@/shared/topology/schema';
@@ -34,6 +35,27 @@ describe('cable reach against the published values', () => {
     expect(reachOf('om3', 25)!.maxM).toBe(70); // IEEE 802.3by clause 112
     expect(reachOf('om4', 25)!.maxM).toBe(100); // IEEE 802.3by clause 112
     expect(reachOf('dac', 10)!.maxM).toBe(7); // SFF-8431 appendix E (common practice for the limit)
+  });
+
+  it('holds the other check values to theirs', () => {
+    expect(reachOf('cat5e', 2.5)!.maxM).toBe(100); // IEEE 802.3bz, 2.5GBASE-T (secondary source)
+    expect(reachOf('cat6', 5)!.maxM).toBe(100); // IEEE 802.3bz, 5GBASE-T (secondary source)
+    expect(reachOf('cat5e', 10)).toBeNull(); // IEEE 802.3an specifies 10GBASE-T on Category 6 and 6A only
+    expect(reachOf('om4', 1)!.maxM).toBe(550); // IEEE 802.3z 1000BASE-SX (from memory)
+    expect(LIMITS.vlanMin.value).toBe(1); // IEEE 802.1Q: 0 is reserved
+    expect(LIMITS.mtuMin.value).toBe(576); // RFC 791 §3.1; the lower bound of the format's 576–9216
+    expect(LIMITS.mtuMax.value).toBe(9216); // common practice; the upper bound of the format's 576–9216
+    expect(LIMITS.iscsiTcpPort.value).toBe(3260); // RFC 7143 §15
+    expect(LIMITS.rackUnitMm.value).toBe(44.45); // EIA-310-D: 1U = 1.75 in
+  });
+
+  it('names a source, or says it has none, for every entry of the tables', () => {
+    const unsourced = [...Object.entries(LIMITS), ...REACH.map((r) => [`${r.media}@${r.speedGbps}`, r] as const)].filter(
+      ([, entry]) => !/(RFC \d+|IEEE 802|SFF-\d+|EIA-|TIA|common practice)/.test(entry.source),
+    );
+    expect(unsourced).toEqual([]);
+    // Clause numbers recalled rather than read are marked as such (check-values.md).
+    expect(reachOf('cat5e', 1)!.source).toContain('from memory');
   });
 
   it('flags 10GBASE-T past 55 m of Category 6 but not Category 6A up to 100 m', () => {
@@ -171,6 +193,8 @@ describe('iSCSI names', () => {
       expect({ name, ok: checkIscsiName(name).ok }).toEqual({ name, ok: false });
     }
     expect(checkIscsiName('iqn.2001-04.com.example:' + 'a'.repeat(223 - 24)).ok).toBe(true); // exactly 223 bytes
+    // RFC 7143 §4.2.7.1: the limit is in bytes of UTF-8, so 100 two-byte letters (200 bytes) overflow it.
+    expect(checkIscsiName('iqn.2001-04.com.example:' + 'é'.repeat(100))).toEqual({ ok: false, reason: 'it is 224 bytes long; the limit is 223' });
     expect(LIMITS.iscsiNameMaxBytes.value).toBe(223); // RFC 7143 §4.2.7.1
   });
 
