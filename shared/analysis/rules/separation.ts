@@ -76,7 +76,7 @@ export function separationFindings(ctx: AnalysisContext): Finding[] {
       rule: 'shared-switch-in-use',
       severity: 'warning',
       subjects: [device.id],
-      message: `Switch ${nameOf(ctx, device.id)} carries both management and data; keep them on separate switches unless this was agreed.`,
+      message: `Switch ${nameOf(ctx, device.id)} is in use with the shared role, carrying management and data together; keep them on separate switches unless this was agreed.`,
     });
   }
   return findings;
