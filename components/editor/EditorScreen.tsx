@@ -8,6 +8,8 @@ import { designKeys } from '@/lib/api/designs';
 import { fetchVersionDocument } from '@/lib/api/editor-save';
 import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { createGestures } from '@/lib/editor/gestures';
+import { boxOf, buildSnapshot } from '@/lib/editor/geometry';
+import { revealAbove } from '@/lib/editor/reveal';
 import { useDirty, useReadOnly, useSelection } from '@/lib/editor/hooks';
 import { attachLiveAnalysis, liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
@@ -30,6 +32,9 @@ import { NetworksScreen } from '@/components/networks/NetworksScreen';
 import { Palette } from '@/components/editor/Palette';
 
 type Dialog = null | 'save' | 'help';
+
+/** The share of the phone's canvas left above the inspector sheet (the sheet is 42 % high). */
+const SHEET_GAP = 0.56;
 
 /**
  * The canvas editor of one design: toolbar, palette, canvas and inspector on a wide screen; on a
@@ -83,6 +88,17 @@ export function EditorScreen({ designId }: { designId: number }) {
     }
   }, [ready, screen.width, gestures]);
 
+  // Phone: a tapped device, card or port comes into the part of the canvas above the sheet, readable.
+  const only = selection.length === 1 ? selection[0] : null;
+  useEffect(() => {
+    if (wide || !only) return;
+    const state = editorStore.getState();
+    const box = boxOf(buildSnapshot(state.doc), only);
+    const screenNow = canvasUiStore.getState().screen;
+    if (!box || screenNow.width === 0) return;
+    state.setViewport(revealAbove(state.viewport, box, screenNow, screenNow.height * SHEET_GAP));
+  }, [wide, only]);
+
   const guard = useLeaveGuard(ready && dirty && !readOnly);
   const leave = useCallback((href: string) => router.push(href as Href), []);
   const requestLeave = (href: string) => (dirty && !readOnly ? guard.ask(href) : leave(href));
@@ -130,7 +146,7 @@ export function EditorScreen({ designId }: { designId: number }) {
         <View style={styles.notice}>
           {state.layoutFixed ? (
             <Banner tone="info" title="Boxes re-arranged" testID="editor-layout-fixed" action={<Button label="OK" variant="ghost" size="compact" onPress={() => setNoticeHidden(true)} testID="editor-notice-close" />}>
-              The saved layout had overlapping boxes on this canvas, so they were arranged afresh. The new layout goes with the next version you save.
+              {readOnly ? 'The saved layout had overlapping boxes on this canvas, so they are shown arranged afresh.' : 'The saved layout had overlapping boxes on this canvas, so they were arranged afresh. The new layout goes with the next version you save.'}
             </Banner>
           ) : null}
           {savedAs !== null && !dirty ? (

@@ -29,7 +29,7 @@ function Status() {
   const base = useBaseVersion();
   const errors = useStore(liveAnalysisStore, (s) => s.report?.findings.filter((f) => f.severity === 'error').length ?? null);
   const version = base === null ? 'no version yet' : `version ${base}`;
-  const state = readOnly ? `Read-only · ${version}` : dirty ? `Unsaved · on ${version}` : base === null ? 'No version saved yet' : `Saved · ${version}`;
+  const state = readOnly ? `Read-only · ${version}` : dirty ? (base === null ? 'Unsaved · no version yet' : `Unsaved · on ${version}`) : base === null ? 'No version saved yet' : `Saved · ${version}`;
   return (
     <Text variant="caption" color={dirty && !readOnly ? 'copper' : 'inkMuted'} numberOfLines={1} testID="editor-status">
       {`${dirty && !readOnly ? '● ' : ''}${state}${errors === null ? '' : ` · ${errors} problem${errors === 1 ? '' : 's'}`}`}
@@ -49,14 +49,14 @@ export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAd
   const insets = useSafeAreaInsets();
   const tools = (
     <>
-      {!readOnly && view === 'canvas' ? <IconButton icon="add" label={wide ? (paletteOpen ? 'Hide the palette' : 'Add devices') : 'Add a device'} onPress={onAdd} active={paletteOpen} showLabel={wide && !paletteOpen} testID="toolbar-add" /> : null}
+      {!readOnly && view === 'canvas' ? <IconButton icon="add" label={wide ? (paletteOpen ? 'Hide the palette' : 'Add devices') : 'Add a device'} onPress={onAdd} active={paletteOpen} testID="toolbar-add" /> : null}
       {!readOnly ? <IconButton icon="undo" label="Undo" shortcut="Ctrl+Z" onPress={() => store.undo()} disabled={!canUndo} testID="toolbar-undo" /> : null}
       {!readOnly ? <IconButton icon="redo" label="Redo" shortcut="Ctrl+Shift+Z" onPress={() => store.redo()} disabled={!canRedo} testID="toolbar-redo" /> : null}
       {!readOnly && wide && view === 'canvas' ? <IconButton icon="trash" label="Delete selected" shortcut="Delete" onPress={deleteSelection} disabled={!selected} testID="toolbar-delete" /> : null}
       {!readOnly && view === 'canvas' ? <IconButton icon="arrange" label="Auto-arrange" shortcut="Shift+A" onPress={arrange} showLabel={wide} testID="toolbar-arrange" /> : null}
       <IconButton icon={view === 'canvas' ? 'networks' : 'canvas'} label={view === 'canvas' ? 'Networks & addresses' : 'Back to the canvas'} onPress={() => onView(view === 'canvas' ? 'networks' : 'canvas')} showLabel={wide} testID="toolbar-view" />
       {!wide && view === 'canvas' ? <IconButton icon="findings" label="Findings" onPress={onFindings} testID="toolbar-findings" /> : null}
-      <IconButton icon="export" label="Export SVG" onPress={() => void downloadDiagram()} showLabel={wide} testID="toolbar-export" />
+      <IconButton icon="export" label="Export the diagram as SVG" onPress={() => void downloadDiagram()} testID="toolbar-export" />
       <IconButton icon="help" label="Canvas help" shortcut="?" onPress={onHelp} testID="toolbar-help" />
     </>
   );

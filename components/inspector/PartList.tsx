@@ -13,7 +13,7 @@ export function PartList({ device, groups, readOnly }: Props) {
     return (
       <View style={styles.wrap}>
         <Text variant="label">{`Ports (${device.ports.length})`}</Text>
-        <Text variant="small" color="inkMuted">Tap a port on the canvas to edit it or to start a cable from it.</Text>
+        <Text variant="small" color="inkMuted">{readOnly ? 'Tap a port on the canvas to see it.' : 'Tap a port on the canvas to edit it or to start a cable from it.'}</Text>
         {!readOnly ? <Button label="Add a port" variant="secondary" size="compact" onPress={() => runEdit('addPort', { ownerId: device.id })} testID="inspector-add-port" /> : null}
       </View>
     );

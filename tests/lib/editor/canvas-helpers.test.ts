@@ -8,6 +8,7 @@ import { computeMarks, EMPTY_MARKS } from '@/lib/editor/marks';
 import { placeInView } from '@/lib/editor/placement';
 import { actionFor } from '@/lib/editor/shortcuts';
 import { withTidyLayout } from '@/lib/editor/tidy';
+import { revealAbove } from '@/lib/editor/reveal';
 import { apply, smallDesign } from '@/tests/lib/editor/helpers/editor';
 
 const key = (key: string, mods: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }> = {}) => ({ key, ctrlKey: false, metaKey: false, shiftKey: false, altKey: false, ...mods });
@@ -101,5 +102,19 @@ describe('putting ports on a network in one step', () => {
       ['management', ''],
       ['management', ''],
     ]);
+  });
+});
+
+describe('revealing a tapped thing above the phone’s sheet', () => {
+  it('zooms to a readable size and centres it in the part left uncovered', () => {
+    const target = { x: 1000, y: 500, width: 276, height: 86 };
+    const v = revealAbove({ x: 0, y: 0, zoom: 0.2 }, target, { width: 390, height: 700 }, 392);
+    expect(v.zoom).toBe(0.8);
+    expect([(1138 - v.x) * v.zoom, (543 - v.y) * v.zoom]).toEqual([195, 196]);
+  });
+
+  it('leaves the view alone when the thing is readable and uncovered', () => {
+    const v = { x: 900, y: 400, zoom: 1 };
+    expect(revealAbove(v, { x: 950, y: 450, width: 200, height: 80 }, { width: 390, height: 700 }, 392)).toBe(v);
   });
 });

@@ -1,0 +1,34 @@
+import { expect, test } from '@playwright/test';
+import { shot, signIn } from './helpers';
+import { designIdByName, openEditor } from './canvas-helpers';
+
+test('on a phone: open the demo design, select a host, rename it in the bottom sheet, undo', async ({ page }, testInfo) => {
+  await signIn(page, 'ravi@tidewater.example');
+  await openEditor(page, await designIdByName(page, 'Harbor Road storage'));
+  // The canvas fills the screen: no tab bar, and no side panel on a phone.
+  await expect(page.getByTestId('nav-tabs')).toHaveCount(0);
+  await expect(page.getByTestId('side-panels')).toHaveCount(0);
+  await shot(page, testInfo, 'canvas-phone-open');
+
+  await page.getByTestId('device-header-wms-db-1').tap();
+  const sheet = page.getByTestId('sheet-inspector');
+  await expect(sheet).toBeVisible();
+  await expect(sheet).toContainText('Host wms-db-1');
+  await sheet.getByTestId('inspector-name').fill('wms-db-primary');
+  await sheet.getByTestId('inspector-name').press('Enter');
+  await expect(page.getByTestId('device-header-wms-db-1')).toContainText('wms-db-primary');
+  await expect(page.getByTestId('editor-status')).toContainText('Unsaved');
+  await shot(page, testInfo, 'canvas-phone-renamed');
+
+  await page.getByTestId('toolbar-undo').tap();
+  await expect(page.getByTestId('device-header-wms-db-1')).toContainText('wms-db-1');
+  await expect(page.getByTestId('device-header-wms-db-1')).not.toContainText('primary');
+  await expect(sheet.getByTestId('inspector-name')).toHaveValue('wms-db-1');
+  await expect(page.getByTestId('toolbar-redo')).toBeEnabled();
+  await shot(page, testInfo, 'canvas-phone-undone');
+
+  // Findings come up as a sheet; a tap on one selects its subjects.
+  await page.getByTestId('toolbar-findings').tap();
+  await expect(page.getByTestId('sheet-findings')).toBeVisible();
+  await shot(page, testInfo, 'canvas-phone-findings');
+});
