@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import { securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session-middleware';
+import { devWebProxy } from './http/dev-proxy';
 import { webApp } from './http/web-app';
 import type { Mailer } from './mail/mailer';
 import { loadSessionUser } from './middleware/auth';
@@ -39,7 +40,7 @@ export function createApp({ sequelize, mailer, config }: AppDeps): Express {
   api.use(apiRoutes(services, mailer.mailbox));
   app.use('/api', api);
 
-  app.use(webApp(config.webDir));
+  app.use(config.webDevServer ? devWebProxy(config.webDevServer) : webApp(config.webDir));
   app.use(apiNotFound);
   app.use(errorHandler);
   return app;

@@ -18,6 +18,7 @@ const envSchema = z.object({
   APP_URL: z.url({ protocol: /^https?$/, error: 'use an http:// or https:// URL' }).optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
   WEB_DIR: z.string().trim().min(1).optional(),
+  WEB_DEV_SERVER: z.url({ protocol: /^https?$/, error: 'use an http:// URL such as http://localhost:8081' }).optional(),
 });
 
 export type MailConfig = { kind: 'fake' } | { kind: 'smtp'; url: string };
@@ -39,6 +40,8 @@ export type Config = {
   bcryptCost: number;
   /** Folder of the exported web app (served with an SPA fallback when it holds index.html). */
   webDir: string;
+  /** `npm run dev`: pages come from Expo's dev server through this app, so the browser sees one origin. */
+  webDevServer: string | null;
 };
 
 /** Expo's dev server (npm run dev) calls the API from this origin. */
@@ -75,6 +78,9 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   if (isProduction && bcryptCost < MIN_PRODUCTION_BCRYPT_COST) {
     problems.push(`BCRYPT_COST: at least ${MIN_PRODUCTION_BCRYPT_COST} in production`);
   }
+  if (isProduction && e.WEB_DEV_SERVER) {
+    problems.push('WEB_DEV_SERVER: only for development; production serves the exported web app');
+  }
   if (problems.length > 0) throw new ConfigError(problems);
 
   const appUrl = (e.APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
@@ -92,6 +98,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     trustedOrigins,
     bcryptCost,
     webDir: path.resolve(e.WEB_DIR ?? 'dist/web'),
+    webDevServer: e.WEB_DEV_SERVER ?? null,
   };
 }
 

@@ -28,6 +28,11 @@ describe('server configuration from the environment', () => {
     expect(config.webDir).toBe(path.resolve('dist/web'));
   });
 
+  it('refuses the dev-server proxy in production', () => {
+    expect(problems({ ...PROD, WEB_DEV_SERVER: 'http://localhost:8081' }).join(' ')).toMatch(/WEB_DEV_SERVER/);
+    expect(loadConfig({ WEB_DEV_SERVER: 'http://localhost:8081' }).webDevServer).toBe('http://localhost:8081');
+  });
+
   it('makes a different random session secret per process start', () => {
     expect(loadConfig({}).sessionSecret).not.toBe(loadConfig({}).sessionSecret);
   });

@@ -1,4 +1,5 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { createServer } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
@@ -143,6 +144,28 @@ describe('serving the exported web app', () => {
     } finally {
       await early.close();
       rmSync(later, { recursive: true, force: true });
+    }
+  });
+});
+
+describe('development through the Expo dev server (npm run dev)', () => {
+  it('passes pages to the dev server and keeps /api on this app', async () => {
+    const metro = createServer((req, res) => {
+      res.setHeader('content-type', 'text/html');
+      res.end(`<!doctype html><title>dev page for ${req.url}</title>`);
+    });
+    await new Promise<void>((resolve) => metro.listen(0, '127.0.0.1', resolve));
+    const { port } = metro.address() as { port: number };
+    const t = await makeTestApp({ env: { WEB_DEV_SERVER: `http://127.0.0.1:${port}` }, seed: false });
+    try {
+      const page = await request(t.app).get('/designs/3').expect(200);
+      expect(page.text).toContain('dev page for /designs/3');
+      const api = await request(t.app).get('/api/auth/me');
+      expect(api.status).toBe(401);
+      expect(api.headers['content-type']).toMatch(/application\/json/);
+    } finally {
+      await t.close();
+      await new Promise((resolve) => metro.close(resolve));
     }
   });
 });
