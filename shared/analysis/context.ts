@@ -13,8 +13,8 @@ export type AnalysisContext = {
   failed: ReadonlySet<string>;
   /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
   hasNetworks: boolean;
-  /** dataCable() of every cable, in document order; filled on first use (see dataCables). */
-  cache: { dataCables?: (DataCableEnds | null)[]; ips?: Map<string, Ip | null> };
+  /** The cables that can carry a data path, in document order; filled on first use (see dataCables). */
+  cache: { dataCables?: readonly DataCableEnds[]; ips?: Map<string, Ip | null> };
 };
 
 export type DataCableEnds = { cable: Cable; a: PortRef; b: PortRef; roleA: EndRole; roleB: EndRole };
@@ -67,9 +67,16 @@ export function ipOf(ctx: AnalysisContext, text: string): Ip | null {
 }
 
 /** Every cable that can carry a data path, classified once per analysis and shared by its parts. */
-export function dataCables(ctx: AnalysisContext): DataCableEnds[] {
-  if (!ctx.cache.dataCables) ctx.cache.dataCables = ctx.doc.cables.map((cable) => dataCable(ctx, cable));
-  return ctx.cache.dataCables.filter((ends): ends is DataCableEnds => ends !== null);
+export function dataCables(ctx: AnalysisContext): readonly DataCableEnds[] {
+  if (!ctx.cache.dataCables) {
+    const list: DataCableEnds[] = [];
+    for (const cable of ctx.doc.cables) {
+      const ends = dataCable(ctx, cable);
+      if (ends) list.push(ends);
+    }
+    ctx.cache.dataCables = list;
+  }
+  return ctx.cache.dataCables;
 }
 
 /** Whether a host port and a controller port may form a session by their networks. */

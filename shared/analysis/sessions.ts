@@ -71,7 +71,7 @@ class Table {
 type EndVisitor = (here: PortRef, role: EndRole, there: PortRef, thereRole: EndRole) => void;
 
 /** Every data cable seen from each of its two ends. */
-function forEachEnd(cables: DataCableEnds[], visit: EndVisitor): void {
+function forEachEnd(cables: readonly DataCableEnds[], visit: EndVisitor): void {
   for (const ends of cables) {
     visit(ends.a, ends.roleA, ends.b, ends.roleB);
     visit(ends.b, ends.roleB, ends.a, ends.roleA);
