@@ -8,7 +8,8 @@ import { isWide, shot, signIn } from './helpers';
 import { designIdFromUrl, failUnit, hostsCutOff, selectVersion, switchUser, versionDocument } from './designs-helpers';
 
 test('designer starts from a dual-fabric pattern, saves and submits a second version; reviewer tests and approves it; installer sees only the approved version', async ({ page }, testInfo) => {
-  test.setTimeout(120_000);
+  // Three sign-ins, an upload, a diff and two simulations: generous, so a busy machine does not fail it.
+  test.setTimeout(240_000);
   const name = `Pier 4 cold rooms (${testInfo.project.name})`;
 
   // Designer: a dual-fabric pattern with three hosts becomes version 1.
