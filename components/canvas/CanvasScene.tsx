@@ -8,6 +8,7 @@ import { HATCH_ID, INK } from '@/lib/editor/drawing';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { useCanvasSnapshot, usePendingCableStart, useSelection, useViewport } from '@/lib/editor/hooks';
 import { withMovedDevices, type Snapshot } from '@/lib/editor/snapshot';
+import { cull, cullRect, DETAIL_ZOOM } from '@/lib/editor/culling';
 import { CableLayer, DeviceLayer } from '@/components/canvas/Layers';
 import { Marquee, RubberBand } from '@/components/canvas/Overlays';
 
@@ -50,6 +51,9 @@ export function CanvasScene({ width, height, label }: { width: number; height: n
   const doc = snapshot.doc;
 
   const shown = useMemo(() => (drag ? withMovedDevices(snapshot, drag.moves) : snapshot), [snapshot, drag]);
+  const area = cullRect(viewport, { width, height });
+  const drawn = useMemo(() => cull(shown, area), [shown, area.x, area.y, area.width, area.height]); // eslint-disable-line react-hooks/exhaustive-deps
+  const detail = viewport.zoom >= DETAIL_ZOOM;
   const fabrics = useMemo(() => computeFabrics(doc), [doc.devices, doc.cables, doc.networks]); // eslint-disable-line react-hooks/exhaustive-deps
   const cabled = useMemo(() => cabledByDevice(snapshot), [snapshot.doc.cables, snapshot.parts]); // eslint-disable-line react-hooks/exhaustive-deps
   const selectionSet = useMemo(() => new Set(selection), [selection]);
@@ -73,8 +77,8 @@ export function CanvasScene({ width, height, label }: { width: number; height: n
       <Rect width={width} height={height} fill={INK.paper} />
       <G transform={transform}>
         {zoom >= 0.4 ? <Rect x={world.x} y={world.y} width={world.width} height={world.height} fill="url(#cw-grid)" /> : null}
-        <CableLayer cables={shown.cables} fabrics={fabrics} selection={selectionSet} marks={marks} />
-        <DeviceLayer devices={shown.devices} fabrics={fabrics} selection={selectionSet} partsByDevice={parts} cabledByDevice={cabled} pendingPort={pending} pendingDevice={pendingDevice} marks={marks} />
+        <CableLayer cables={drawn.cables} fabrics={fabrics} selection={selectionSet} marks={marks} detail={detail} />
+        <DeviceLayer devices={drawn.devices} detail={detail} fabrics={fabrics} selection={selectionSet} partsByDevice={parts} cabledByDevice={cabled} pendingPort={pending} pendingDevice={pendingDevice} marks={marks} />
         <RubberBand snapshot={shown} pendingPort={pending} zoom={zoom} />
         <Marquee zoom={zoom} />
       </G>

@@ -18,6 +18,8 @@ import { SpofOutline } from '@/components/canvas/SpofMark';
  */
 export type DeviceNodeProps = {
   box: DeviceBox;
+  /** Port and group labels are drawn (off when zoomed out too far to read them). */
+  detail: boolean;
   selected: boolean;
   /** Selected controllers, cards and ports of this device. */
   selectedParts: string;
@@ -31,7 +33,7 @@ const split = (joined: string) => new Set(joined ? joined.split('\n') : []);
 
 type BodyProps = Omit<DeviceNodeProps, 'box' | 'selected'> & { id: string; kind: DeviceBox['kind']; name: string; switchRole: DeviceBox['switchRole']; shape: DeviceShape };
 
-const DeviceBody = memo(function DeviceBody({ id, kind, name, switchRole, shape, selectedParts, pendingPort, cabled, marks, fabric }: BodyProps) {
+const DeviceBody = memo(function DeviceBody({ id, kind, name, switchRole, shape, detail, selectedParts, pendingPort, cabled, marks, fabric }: BodyProps) {
   const style = KIND_STYLE[kind];
   const cabledSet = useMemo(() => split(cabled), [cabled]);
   const partSet = useMemo(() => split(selectedParts), [selectedParts]);
@@ -47,14 +49,16 @@ const DeviceBody = memo(function DeviceBody({ id, kind, name, switchRole, shape,
         return (
           <G key={group.id} testID={`group-${group.id}`}>
             <Rect x={r.x} y={r.y} width={r.width} height={r.height} rx={4} fill={INK.paper} stroke={selected ? INK.copper : INK.line} strokeWidth={selected ? 3 : 1} />
-            <Text x={r.x + 5} y={r.y + 13} fontSize={L.groupLabelSize} fontFamily={selected ? fonts.semibold : fonts.regular} fill={selected ? INK.copper : INK.inkMuted}>
-              {group.name}
-            </Text>
+            {detail ? (
+              <Text x={r.x + 5} y={r.y + 13} fontSize={L.groupLabelSize} fontFamily={selected ? fonts.semibold : fonts.regular} fill={selected ? INK.copper : INK.inkMuted}>
+                {group.name}
+              </Text>
+            ) : null}
           </G>
         );
       })}
       {shape.ports.map((port) => (
-        <PortGlyph key={port.id} port={port} cabled={cabledSet.has(port.id)} selected={partSet.has(port.id)} pending={pendingPort === port.id} />
+        <PortGlyph key={port.id} port={port} detail={detail} cabled={cabledSet.has(port.id)} selected={partSet.has(port.id)} pending={pendingPort === port.id} />
       ))}
       {shape.groups.filter((g) => spofGroups.has(g.id)).map((g) => (
         <SpofOutline key={`spof-${g.id}`} unitId={g.id} x={g.rect.x} y={g.rect.y} width={g.rect.width} height={g.rect.height} />

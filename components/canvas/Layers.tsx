@@ -9,18 +9,20 @@ import { DeviceNode } from '@/components/canvas/DeviceNode';
  * The two layers of the drawing, cables under devices. Each maps over its items and passes
  * value-comparable props, so only items whose box, line, selection or marks changed re-render.
  */
-type CableLayerProps = { cables: Snapshot['cables']; fabrics: Fabrics; selection: ReadonlySet<string>; marks: CanvasMarks };
+type CableLayerProps = { cables: Snapshot['cables']; fabrics: Fabrics; selection: ReadonlySet<string>; marks: CanvasMarks; detail: boolean };
 
-export const CableLayer = memo(function CableLayer({ cables, fabrics, selection, marks }: CableLayerProps) {
+export const CableLayer = memo(function CableLayer({ cables, fabrics, selection, marks, detail }: CableLayerProps) {
   const out = [];
   for (const line of cables.values()) {
-    out.push(<CableView key={line.id} line={line} fabric={fabrics.byCable.get(line.id) ?? null} selected={selection.has(line.id)} spof={marks.spofCables.has(line.id)} />);
+    out.push(<CableView key={line.id} line={line} fabric={fabrics.byCable.get(line.id) ?? null} selected={selection.has(line.id)} spof={marks.spofCables.has(line.id)} detail={detail} />);
   }
   return <>{out}</>;
 });
 
 type DeviceLayerProps = {
   devices: Snapshot['devices'];
+  /** Labels inside devices are drawn (the zoom makes them readable). */
+  detail: boolean;
   fabrics: Fabrics;
   selection: ReadonlySet<string>;
   /** Selected part ids per device, "\n"-joined. */
@@ -31,13 +33,14 @@ type DeviceLayerProps = {
   marks: CanvasMarks;
 };
 
-export const DeviceLayer = memo(function DeviceLayer({ devices, fabrics, selection, partsByDevice, cabledByDevice, pendingPort, pendingDevice, marks }: DeviceLayerProps) {
+export const DeviceLayer = memo(function DeviceLayer({ devices, detail, fabrics, selection, partsByDevice, cabledByDevice, pendingPort, pendingDevice, marks }: DeviceLayerProps) {
   const out = [];
   for (const box of devices.values()) {
     out.push(
       <DeviceNode
         key={box.id}
         box={box}
+        detail={detail}
         selected={selection.has(box.id)}
         selectedParts={partsByDevice.get(box.id) ?? ''}
         pendingPort={pendingDevice === box.id ? pendingPort : null}

@@ -4,14 +4,14 @@ import { INK, portCaption, portPath, portRailPath } from '@/lib/editor/drawing';
 import type { LocalPort } from '@/lib/editor/shape';
 import { fonts } from '@/components/ui';
 
-type PortGlyphProps = { port: LocalPort; cabled: boolean; selected: boolean; pending: boolean };
+type PortGlyphProps = { port: LocalPort; cabled: boolean; selected: boolean; pending: boolean; detail?: boolean };
 
 /**
  * One port: its outline (an RJ45 latch notch or an SFP cage rail), filled when a cable is on it,
  * its name inside, and an invisible 44 px tap target around it. Management ports have a dashed
  * copper outline. The selected port gets a heavy ring; the start of a cable being drawn a dashed one.
  */
-export const PortGlyph = memo(function PortGlyph({ port, cabled, selected, pending }: PortGlyphProps) {
+export const PortGlyph = memo(function PortGlyph({ port, cabled, selected, pending, detail = true }: PortGlyphProps) {
   const management = port.role === 'management';
   const rail = portRailPath(port.connector, port.rect);
   const { target, rect } = port;
@@ -40,9 +40,11 @@ export const PortGlyph = memo(function PortGlyph({ port, cabled, selected, pendi
         strokeDasharray={management ? '3 2' : undefined}
       />
       {rail ? <Path d={rail} stroke={INK.inkMuted} strokeWidth={1} /> : null}
-      <Text x={port.anchor.x} y={port.anchor.y + 4} fontSize={caption.size} fontFamily={fonts.regular} fill={INK.ink} textAnchor="middle">
-        {caption.text}
-      </Text>
+      {detail ? (
+        <Text x={port.anchor.x} y={port.anchor.y + 4} fontSize={caption.size} fontFamily={fonts.regular} fill={INK.ink} textAnchor="middle">
+          {caption.text}
+        </Text>
+      ) : null}
     </G>
   );
 });

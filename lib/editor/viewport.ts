@@ -7,7 +7,8 @@ import type { Point, Rect } from '@/lib/editor/shape';
 export type Viewport = { x: number; y: number; zoom: number };
 export type Size = { width: number; height: number };
 
-export const MIN_ZOOM = 0.1;
+/** Low enough that fitting a few hundred devices laid out in long bands still shows all of them. */
+export const MIN_ZOOM = 0.02;
 export const MAX_ZOOM = 4;
 export const DEFAULT_VIEWPORT: Viewport = { x: 0, y: 0, zoom: 1 };
 export const GRID_SIZE = 20;

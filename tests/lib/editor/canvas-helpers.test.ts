@@ -9,6 +9,9 @@ import { placeInView } from '@/lib/editor/placement';
 import { actionFor } from '@/lib/editor/shortcuts';
 import { withTidyLayout } from '@/lib/editor/tidy';
 import { revealAbove } from '@/lib/editor/reveal';
+import { cull, cullRect } from '@/lib/editor/culling';
+import { fitToBounds } from '@/lib/editor/viewport';
+import { bigDesign } from '@/tests/lib/editor/helpers/big-design';
 import { apply, smallDesign } from '@/tests/lib/editor/helpers/editor';
 
 const key = (key: string, mods: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }> = {}) => ({ key, ctrlKey: false, metaKey: false, shiftKey: false, altKey: false, ...mods });
@@ -116,5 +119,22 @@ describe('revealing a tapped thing above the phone’s sheet', () => {
   it('leaves the view alone when the thing is readable and uncovered', () => {
     const v = { x: 900, y: 400, zoom: 1 };
     expect(revealAbove(v, { x: 950, y: 450, width: 200, height: 80 }, { width: 390, height: 700 }, 392)).toBe(v);
+  });
+});
+
+describe('drawing only what is on screen', () => {
+  it('keeps every device of a fitted design and only the nearby ones when zoomed in', () => {
+    const doc = bigDesign();
+    const snapshot = buildSnapshot(doc);
+    const screen = { width: 1000, height: 800 };
+    const all = cull(snapshot, cullRect(fitToBounds(snapshot.bounds, screen, 40, 1), screen));
+    expect([all.devices.size, all.cables.size]).toEqual([300, 600]);
+    const box = snapshot.devices.get('switch-20')!;
+    const near = cull(snapshot, cullRect({ x: box.position.x - 200, y: box.position.y - 300, zoom: 1 }, screen));
+    expect(near.devices.has('switch-20')).toBe(true);
+    // A 1000 × 800 view widened by half a screen each way and snapped to 512 px tiles: a fraction of the 300.
+    expect(near.devices.size).toBeLessThan(60);
+    // Every cable of a drawn device is drawn, so no line stops short at the edge of the drawn set.
+    for (const id of snapshot.cablesByDevice.get('switch-20')!) expect(near.cables.has(id)).toBe(true);
   });
 });
