@@ -175,7 +175,8 @@ function pairResult(host: string, array: string, spof: string[], sessions: Sessi
     host,
     array,
     sessions: pair.sessions,
-    controllersReached: pair.controllers.slice().sort(byId),
+    // The session table is this analysis's own and read once per pair: its list can be sorted in place.
+    controllersReached: pair.controllers.sort(byId),
     singlePointsOfFailure,
     redundant: singlePointsOfFailure.length === 0,
   };
