@@ -88,12 +88,15 @@ export function EditorScreen({ designId }: { designId: number }) {
     }
   }, [ready, screen.width, gestures]);
 
-  // Phone: a tapped device, card or port comes into the part of the canvas above the sheet, readable.
+  // Phone: a tapped device, card or controller comes into the part of the canvas above the sheet,
+  // readable. Ports are left where they are: the next tap may be the other end of a cable.
   const only = selection.length === 1 ? selection[0] : null;
   useEffect(() => {
     if (wide || !only) return;
     const state = editorStore.getState();
-    const box = boxOf(buildSnapshot(state.doc), only);
+    const snapshot = buildSnapshot(state.doc);
+    if (!snapshot.devices.has(only) && snapshot.parts.get(only)?.kind !== 'group') return;
+    const box = boxOf(snapshot, only);
     const screenNow = canvasUiStore.getState().screen;
     if (!box || screenNow.width === 0) return;
     state.setViewport(revealAbove(state.viewport, box, screenNow, screenNow.height * SHEET_GAP));

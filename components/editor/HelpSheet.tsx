@@ -19,7 +19,7 @@ export function HelpSheet({ wide, onClose }: { wide: boolean; onClose: () => voi
   return (
     <Overlay title="Canvas help" onClose={onClose} wide={wide} testID="help-sheet">
       <Text variant="bodyStrong">Pointer and touch</Text>
-      {GESTURES.map((g) => (
+      {GESTURES.filter((g) => wide || g.phone !== '—').map((g) => (
         <View key={g.does} style={styles.row}>
           <Text variant="smallStrong" style={styles.keys}>
             {wide ? g.wide : g.phone}

@@ -11,16 +11,18 @@ type ChipPickerProps<T extends string | number> = {
   disabled?: boolean;
   testID?: string;
   hint?: string;
+  /** The label is still spoken, but not shown (a table's column heading says it already). */
+  hideLabel?: boolean;
 };
 
 /**
  * A compact single choice (a radio group) for the inspector's narrow column: chips that wrap,
  * each at least 44 px tall; the chosen one is filled and underlined, not only tinted.
  */
-export function ChipPicker<T extends string | number>({ label, chips, value, onChange, disabled, testID, hint }: ChipPickerProps<T>) {
+export function ChipPicker<T extends string | number>({ label, chips, value, onChange, disabled, testID, hint, hideLabel }: ChipPickerProps<T>) {
   return (
     <View style={styles.wrap}>
-      <Text variant="label">{label}</Text>
+      {hideLabel ? null : <Text variant="label">{label}</Text>}
       {hint ? (
         <Text variant="small" color="inkMuted">
           {hint}

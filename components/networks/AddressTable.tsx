@@ -61,7 +61,7 @@ const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; d
         <Text variant="small" color="inkMuted">{`${row.port} · ${row.role === 'data' ? 'data' : 'management'}`}</Text>
       </View>
       <View style={wide ? styles.colNetwork : undefined}>
-        <ChipPicker label="Network" chips={chips} value={row.networkId ?? ''} disabled={readOnly} testID={`address-network-${row.portId}`} onChange={(id) => runEdit('setPort', { id: row.portId, networkId: id === '' ? null : id })} />
+        <ChipPicker label={`Network of ${row.device} ${row.port}`} hideLabel={wide} chips={chips} value={row.networkId ?? ''} disabled={readOnly} testID={`address-network-${row.portId}`} onChange={(id) => runEdit('setPort', { id: row.portId, networkId: id === '' ? null : id })} />
       </View>
       <View style={wide ? styles.colAddress : undefined}>
         <AddressInput key={row.address} row={row} readOnly={readOnly} />
@@ -69,9 +69,9 @@ const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; d
       <View style={[styles.colStatus]} testID={`address-status-${row.portId}`}>
         {row.problems.length === 0 ? (
           <View style={styles.status}>
-            <Icon name="success" size={18} color="successText" />
-            <Text variant="small" color="successText">
-              {row.address ? 'OK' : 'Not cabled'}
+            <Icon name={row.address ? 'success' : 'info'} size={18} color={row.address ? 'successText' : 'inkMuted'} />
+            <Text variant="small" color={row.address ? 'successText' : 'inkMuted'}>
+              {row.address ? 'OK' : 'Not cabled, no address needed yet'}
             </Text>
           </View>
         ) : (

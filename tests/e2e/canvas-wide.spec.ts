@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { shot, signIn } from './helpers';
 import { analysisSettled, cablePorts, openEditor } from './canvas-helpers';
@@ -52,6 +53,17 @@ test('from a blank design: a host on one switch has single points of failure, th
   await expect(page.getByTestId('finding-single-point-of-failure-0')).toHaveCount(0);
   await shot(page, testInfo, 'canvas-two-paths');
 
+  // Keyboard: Delete removes the selected host, Mod+Z brings it back; ? opens the help sheet.
+  await page.getByTestId('device-header-host-2').click();
+  await page.keyboard.press('Delete');
+  await expect(page.getByTestId('device-host-2')).toHaveCount(0);
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('device-host-2')).toBeVisible();
+  await page.keyboard.press('?');
+  await expect(page.getByTestId('help-shortcut-arrange')).toContainText('Shift+A');
+  await page.keyboard.press('Escape');
+  await expect(page.getByTestId('help-sheet')).toHaveCount(0);
+
   // Leaving with unsaved changes asks first.
   await page.getByTestId('toolbar-back').click();
   await expect(page.getByTestId('leave-prompt')).toBeVisible();
@@ -62,6 +74,14 @@ test('from a blank design: a host on one switch has single points of failure, th
   await page.getByTestId('save-submit').click();
   await expect(page.getByTestId('editor-saved')).toContainText('Saved as version 1');
   await expect(page.getByTestId('editor-status')).toContainText('Saved · version 1');
+
+  // The whole diagram as a standalone SVG file.
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('toolbar-export').click()]);
+  expect(download.suggestedFilename()).toMatch(/^canvas-run-\d+\.svg$/);
+  const svg = readFileSync((await download.path())!, 'utf8');
+  expect(svg).toContain('<svg xmlns="http://www.w3.org/2000/svg"');
+  for (const device of ['array-1', 'switch-1', 'switch-2', 'host-1', 'host-2']) expect(svg).toContain(`>${device}</text>`);
+  expect(svg.match(/<g id="cable-/g)).toHaveLength(6);
 
   await page.reload();
   await expect(page.getByTestId('canvas-svg')).toBeVisible();
