@@ -2,8 +2,15 @@ import { MEDIA_CONNECTOR, REACH, type Reach } from '@/shared/rules/limits';
 import type { Media } from '@/shared/topology/schema';
 
 /** Cable rules for the analysis and the cable schedule, read from the limits table. */
+const REACH_BY_MEDIA = new Map<Media, Map<number, Reach>>();
+for (const entry of REACH) {
+  let bySpeed = REACH_BY_MEDIA.get(entry.media);
+  if (!bySpeed) REACH_BY_MEDIA.set(entry.media, (bySpeed = new Map()));
+  bySpeed.set(entry.speedGbps, entry);
+}
+
 export function reachOf(media: Media, speedGbps: number): Reach | null {
-  return REACH.find((entry) => entry.media === media && entry.speedGbps === speedGbps) ?? null;
+  return REACH_BY_MEDIA.get(media)?.get(speedGbps) ?? null;
 }
 
 /** The speeds a medium can carry at all, lowest first. */

@@ -42,8 +42,11 @@ function describeCharacter(ch: string): string {
   return `"${ch}"`;
 }
 
+const ALL_ASCII_ALLOWED = /^[a-z0-9.:-]*$/;
+
 /** The first character the prepared name may not hold, or null. */
 function prohibitedCharacter(folded: string): string | null {
+  if (ALL_ASCII_ALLOWED.test(folded)) return null; // nearly every name: no walk over its characters
   for (const ch of folded) {
     const ascii = ch.charCodeAt(0) < 0x80;
     if (ascii ? !ASCII_ALLOWED.test(ch) : PROHIBITED.test(ch)) return ch;
