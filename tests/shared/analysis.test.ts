@@ -1,6 +1,7 @@
 import { analyze } from '@/shared/analysis/analyze';
 import type { HostArrayResult, Report } from '@/shared/analysis/types';
 import * as T from './helpers/topologies';
+import { randomDesign } from './helpers/random-design';
 
 const pair = (report: Report, host: string, array: string): HostArrayResult | undefined =>
   report.hosts.find((p) => p.host === host && p.array === array);
@@ -114,6 +115,22 @@ describe('what-if failures', () => {
 });
 
 describe('determinism', () => {
+  it('gives hosts[] and failures[] in id order whatever order a random design lists its parts in', () => {
+    for (let seed = 1; seed <= 150; seed += 1) {
+      const doc = randomDesign(seed);
+      const turned = {
+        ...doc,
+        devices: [...doc.devices].reverse().map((d) => (d.kind === 'array' ? { ...d, controllers: [...d.controllers].reverse() } : d.kind === 'host' ? { ...d, adapters: [...d.adapters].reverse() } : d)),
+        cables: [...doc.cables].reverse(),
+        networks: [...doc.networks].reverse(),
+      };
+      const [a, b] = [analyze(doc), analyze(turned)];
+      expect({ seed, hosts: JSON.stringify(b.hosts), failures: JSON.stringify(b.failures) }).toEqual({ seed, hosts: JSON.stringify(a.hosts), failures: JSON.stringify(a.failures) });
+      const ids = a.hosts.map((p) => `${p.host}\u0000${p.array}`);
+      expect(ids).toEqual([...ids].sort());
+    }
+  });
+
   it('gives byte-identical JSON for the same document', () => {
     const doc = T.twoArrays();
     expect(JSON.stringify(analyze(doc))).toBe(JSON.stringify(analyze(JSON.parse(JSON.stringify(doc)))));
