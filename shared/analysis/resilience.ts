@@ -1,7 +1,8 @@
 import { hostAttachments, type Attachment } from '@/shared/analysis/attachments';
 import { byId, type AnalysisContext } from '@/shared/analysis/context';
 import { ANY_NETWORK, compileGraph, type CompiledGraph } from '@/shared/analysis/compile';
-import { DominatorSolver, type DominatorRun } from '@/shared/analysis/dominators';
+import { DominatorTree } from '@/shared/analysis/dominator-tree';
+import { DominatorSolver } from '@/shared/analysis/dominators';
 import { buildDataPathGraph } from '@/shared/analysis/graph';
 import { countSessions, type SessionTable } from '@/shared/analysis/sessions';
 import type { FailureResult, HostArrayPair, HostArrayResult, UnitKind } from '@/shared/analysis/types';
@@ -68,48 +69,6 @@ function groupByHost(graph: CompiledGraph, attachments: Attachment[]): HostGroup
   start[hosts.length] = items.length;
   const upstream = Int32Array.from(items, (att) => graph.indexOf.get(att.upstream) ?? -1);
   return { hosts, start, items, upstream };
-}
-
-/** One dominator run read as a tree: depths, and each node's failure units up to the root, memoised. */
-class DominatorTree {
-  private readonly depth: Int32Array;
-  private readonly chains: (string[] | undefined)[];
-
-  constructor(
-    private readonly graph: CompiledGraph,
-    readonly run: DominatorRun,
-  ) {
-    // An immediate dominator is a DFS-tree ancestor, so it has the smaller preorder number.
-    this.depth = new Int32Array(run.count);
-    for (let v = 1; v < run.count; v += 1) this.depth[v] = this.depth[run.idom[v]] + 1;
-    this.chains = new Array(run.count);
-  }
-
-  lowestCommonAncestor(x: number, y: number): number {
-    const { idom } = this.run;
-    let a = x;
-    let b = y;
-    while (this.depth[a] > this.depth[b]) a = idom[a];
-    while (this.depth[b] > this.depth[a]) b = idom[b];
-    while (a !== b) {
-      a = idom[a];
-      b = idom[b];
-    }
-    return a;
-  }
-
-  /** The failure units among v and its dominators (preorder numbers), shared by every caller. */
-  units(v: number): string[] {
-    const cached = this.chains[v];
-    if (cached) return cached;
-    const chain: string[] = [];
-    for (let d = v; d > 0; d = this.run.idom[d]) {
-      const node = this.run.nodes[d];
-      if (this.graph.isUnit[node]) chain.push(this.graph.ids[node]);
-    }
-    this.chains[v] = chain;
-    return chain;
-  }
 }
 
 /**
