@@ -14,6 +14,8 @@ import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { FindingLine } from '@/components/inspector/FindingsAbout';
 
 type Filter = 'all' | Severity;
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 const PAGE = 100;
 
 /**
@@ -53,7 +55,7 @@ export function FindingsPanel({ onFocused }: { onFocused?: () => void }) {
   return (
     <View style={styles.wrap} testID="findings-panel">
       <Text variant="small" color="inkMuted" testID="findings-status" aria-live="polite">
-        {!report ? 'The analysis is running…' : `${counts.error} problems, ${counts.warning} warnings, ${counts.info} notes${pending ? ' — updating…' : ''}`}
+        {!report ? 'The analysis is running…' : `${plural(counts.error, 'problem')}, ${plural(counts.warning, 'warning')}, ${plural(counts.info, 'note')}${pending ? ' — updating…' : ''}`}
       </Text>
       <ChipPicker<Filter>
         label="Show"

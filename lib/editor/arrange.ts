@@ -8,11 +8,18 @@ import { GRID_SIZE } from '@/lib/editor/viewport';
  * the bottom — with the order inside each band taken from dagre's layered layout (Sugiyama-style
  * crossing reduction, Gansner et al. 1993), so cables cross as little as dagre can manage. Bands are
  * then packed left to right from the real device widths, which is what guarantees no two boxes
- * overlap whatever dagre returns. Management links are left out of the ordering (they join the
- * management switch to everything and would only pull it into the middle); management switches
+ * overlap whatever dagre returns; a band too wide for a screen wraps onto more rows. Management
+ * links are left out of the ordering (they join the management switch to everything and would
+ * only pull it into the middle); management switches
  * go at the right end of the switch band, beside the fabrics they are kept apart from.
  */
-export type ArrangeOptions = { origin?: Position; bandGap?: number; deviceGap?: number };
+export type ArrangeOptions = { origin?: Position; bandGap?: number; deviceGap?: number; maxRowWidth?: number };
+
+/**
+ * A band wider than this wraps onto further rows (in the same order), so 250 hosts make a block
+ * the canvas can show, not one line 80,000 px long. Harbor Road's bands stay on one row each.
+ */
+export const MAX_ROW_WIDTH = 3200;
 
 const BAND_OF: Record<Device['kind'], number> = { host: 0, switch: 1, array: 2 };
 
@@ -79,24 +86,46 @@ export function computeArrangement(doc: Topology, options: ArrangeOptions = {}):
   const origin = options.origin ?? { x: 0, y: 0 };
   const bandGap = options.bandGap ?? 160;
   const deviceGap = options.deviceGap ?? 40;
+  const maxRowWidth = options.maxRowWidth ?? MAX_ROW_WIDTH;
   if (doc.devices.length === 0) return {};
-  const rows = bands(doc, dagreOrder(doc));
   const widthOf = (row: Device[]) => row.reduce((sum, d) => sum + deviceShape(d).width, 0) + deviceGap * (row.length - 1);
-  const widest = Math.max(...rows.map(widthOf));
+  const bandRows = bands(doc, dagreOrder(doc)).map((band) => wrap(band, maxRowWidth, deviceGap));
+  const widest = Math.max(...bandRows.flat().map(widthOf));
   const positions: Record<string, Position> = {};
   let y = snapUp(origin.y);
-  for (const row of rows) {
-    // Centre each band under the widest one; ceil to the grid keeps the order and the gaps.
-    let x = origin.x + (widest - widthOf(row)) / 2;
-    let tallest = 0;
-    for (const device of row) {
-      const shape = deviceShape(device);
-      x = snapUp(x);
-      positions[device.id] = { x, y };
-      x += shape.width + deviceGap;
-      tallest = Math.max(tallest, shape.height);
-    }
-    y = snapUp(y + tallest + bandGap);
+  for (const rows of bandRows) {
+    rows.forEach((row, index) => {
+      // Centre each row under the widest one; ceil to the grid keeps the order and the gaps.
+      let x = origin.x + (widest - widthOf(row)) / 2;
+      let tallest = 0;
+      for (const device of row) {
+        const shape = deviceShape(device);
+        x = snapUp(x);
+        positions[device.id] = { x, y };
+        x += shape.width + deviceGap;
+        tallest = Math.max(tallest, shape.height);
+      }
+      y = snapUp(y + tallest + (index === rows.length - 1 ? bandGap : 2 * deviceGap));
+    });
   }
   return positions;
+}
+
+/** A band cut into rows no wider than `max` (a device wider than that gets a row of its own). */
+function wrap(band: Device[], max: number, gap: number): Device[][] {
+  const rows: Device[][] = [];
+  let row: Device[] = [];
+  let width = 0;
+  for (const device of band) {
+    const w = deviceShape(device).width;
+    if (row.length > 0 && width + gap + w > max) {
+      rows.push(row);
+      row = [];
+      width = 0;
+    }
+    width += (row.length > 0 ? gap : 0) + w;
+    row.push(device);
+  }
+  if (row.length > 0) rows.push(row);
+  return rows;
 }

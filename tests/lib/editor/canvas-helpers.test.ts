@@ -10,6 +10,7 @@ import { actionFor } from '@/lib/editor/shortcuts';
 import { withTidyLayout } from '@/lib/editor/tidy';
 import { revealAbove } from '@/lib/editor/reveal';
 import { cull, cullRect } from '@/lib/editor/culling';
+import { MAX_ROW_WIDTH } from '@/lib/editor/arrange';
 import { fitToBounds } from '@/lib/editor/viewport';
 import { bigDesign } from '@/tests/lib/editor/helpers/big-design';
 import { apply, smallDesign } from '@/tests/lib/editor/helpers/editor';
@@ -136,5 +137,21 @@ describe('drawing only what is on screen', () => {
     expect(near.devices.size).toBeLessThan(60);
     // Every cable of a drawn device is drawn, so no line stops short at the edge of the drawn set.
     for (const id of snapshot.cablesByDevice.get('switch-20')!) expect(near.cables.has(id)).toBe(true);
+  });
+});
+
+describe('arranging a large design', () => {
+  it('wraps a wide band onto more rows, in order, with no overlaps', () => {
+    const doc = apply(bigDesign(), 'autoArrange', {});
+    const snapshot = buildSnapshot(doc);
+    expect(overlappingDevices(snapshot)).toEqual([]);
+    // 250 hosts of 276 px no longer make one 79,000 px line.
+    expect(snapshot.bounds!.width).toBeLessThanOrEqual(MAX_ROW_WIDTH);
+    const hostRows = new Set(doc.devices.filter((d) => d.kind === 'host').map((d) => doc.layout![d.id].y));
+    expect(hostRows.size).toBeGreaterThan(1);
+    // Every host row still sits above every switch row, and switches above arrays.
+    const ys = (kind: string) => doc.devices.filter((d) => d.kind === kind).map((d) => doc.layout![d.id].y);
+    expect(Math.max(...ys('host'))).toBeLessThan(Math.min(...ys('switch')));
+    expect(Math.max(...ys('switch'))).toBeLessThan(Math.min(...ys('array')));
   });
 });
