@@ -1,40 +1,36 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { ActivityIndicator, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { router, type Href } from 'expo-router';
 import { useStore } from 'zustand';
-import { Banner, Button, colors, space, Text, WIDE_BREAKPOINT } from '@/components/ui';
 import { useQueryClient } from '@tanstack/react-query';
+import { colors, space, WIDE_BREAKPOINT } from '@/components/ui';
 import { designKeys } from '@/lib/api/designs';
 import { fetchVersionDocument } from '@/lib/api/editor-save';
 import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { createGestures } from '@/lib/editor/gestures';
-import { boxOf, buildSnapshot } from '@/lib/editor/geometry';
-import { revealAbove } from '@/lib/editor/reveal';
 import { useDirty, useReadOnly, useSelection } from '@/lib/editor/hooks';
-import { attachLiveAnalysis, liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
-import { attachWorkingCopy, clearWorkingCopy, defaultStorage } from '@/lib/editor/working-copy';
+import { withTidyLayout } from '@/lib/editor/tidy';
+import { clearWorkingCopy, defaultStorage } from '@/lib/editor/working-copy';
 import { Canvas } from '@/components/canvas/Canvas';
-import { CanvasControls } from '@/components/editor/CanvasControls';
 import { CableChooser } from '@/components/editor/CableChooser';
-import { EditorToolbar, type EditorView } from '@/components/editor/EditorToolbar';
+import { CanvasControls } from '@/components/editor/CanvasControls';
 import { runShortcut } from '@/components/editor/editor-actions';
+import { PhoneSheets, SidePanels } from '@/components/editor/EditorPanels';
+import { EditorLoading, EditorNotices } from '@/components/editor/EditorStates';
+import { EditorToolbar, type EditorView } from '@/components/editor/EditorToolbar';
 import { HelpSheet } from '@/components/editor/HelpSheet';
 import { LeavePrompt } from '@/components/editor/LeavePrompt';
+import { Palette } from '@/components/editor/Palette';
 import { RestorePrompt } from '@/components/editor/RestorePrompt';
 import { SaveDialog } from '@/components/editor/SaveDialog';
-import { SidePanels, PhoneSheets } from '@/components/editor/EditorPanels';
 import { useEditorSession } from '@/components/editor/useEditorSession';
-import { withTidyLayout } from '@/lib/editor/tidy';
 import { useEditorShortcuts } from '@/components/editor/useEditorShortcuts';
+import { useEditorWiring } from '@/components/editor/useEditorWiring';
 import { useLeaveGuard } from '@/components/editor/useLeaveGuard';
 import { NetworksScreen } from '@/components/networks/NetworksScreen';
-import { Palette } from '@/components/editor/Palette';
 
 type Dialog = null | 'save' | 'help';
-
-/** The share of the phone's canvas left above the inspector sheet (the sheet is 42 % high). */
-const SHEET_GAP = 0.56;
 
 /**
  * The canvas editor of one design: toolbar, palette, canvas and inspector on a wide screen; on a
@@ -66,41 +62,7 @@ export function EditorScreen({ designId }: { designId: number }) {
     if (ready && paletteOpen === null) setPaletteOpen(editorStore.getState().doc.devices.length === 0);
   }, [ready, paletteOpen]);
 
-  useEffect(() => {
-    if (!ready) return;
-    const storage = defaultStorage();
-    const detachCopy = storage && !readOnly ? attachWorkingCopy(editorStore, storage) : () => undefined;
-    const detachLive = attachLiveAnalysis(editorStore, liveAnalysisStore, { isBusy: () => canvasUiStore.getState().busy });
-    return () => {
-      detachCopy();
-      detachLive();
-    };
-  }, [ready, readOnly]);
-
-  // The first view of an opened design shows all of it.
-  const fitted = useRef<number | null>(null);
-  const screen = useStore(canvasUiStore, (s) => s.screen);
-  useEffect(() => {
-    const session = editorStore.getState().session;
-    if (ready && screen.width > 0 && fitted.current !== session) {
-      fitted.current = session;
-      gestures.fit();
-    }
-  }, [ready, screen.width, gestures]);
-
-  // Phone: a tapped device, card or controller comes into the part of the canvas above the sheet,
-  // readable. Ports are left where they are: the next tap may be the other end of a cable.
-  const only = selection.length === 1 ? selection[0] : null;
-  useEffect(() => {
-    if (wide || !only) return;
-    const state = editorStore.getState();
-    const snapshot = buildSnapshot(state.doc);
-    if (!snapshot.devices.has(only) && snapshot.parts.get(only)?.kind !== 'group') return;
-    const box = boxOf(snapshot, only);
-    const screenNow = canvasUiStore.getState().screen;
-    if (!box || screenNow.width === 0) return;
-    state.setViewport(revealAbove(state.viewport, box, screenNow, screenNow.height * SHEET_GAP));
-  }, [wide, only]);
+  useEditorWiring({ ready, readOnly, wide, gestures, selection });
 
   const guard = useLeaveGuard(ready && dirty && !readOnly);
   const leave = useCallback((href: string) => router.push(href as Href), []);
@@ -121,44 +83,14 @@ export function EditorScreen({ designId }: { designId: number }) {
   );
 
   const state = session.state;
-  if (state.status === 'loading' || state.status === 'error') {
-    return (
-      <View style={styles.center} testID="editor-loading">
-        {state.status === 'error' ? (
-          <View style={styles.problem}>
-            <Banner tone="error" title="The design could not be opened">
-              {state.message}
-            </Banner>
-            <Button label="Try again" onPress={state.retry} />
-          </View>
-        ) : (
-          <>
-            <ActivityIndicator size="large" color={colors.primary} />
-            <Text color="inkMuted">Opening the design…</Text>
-          </>
-        )}
-      </View>
-    );
-  }
+  if (state.status === 'loading') return <EditorLoading />;
+  if (state.status === 'error') return <EditorLoading error={state} />;
 
   const canvas = (
     <View style={styles.canvasArea}>
       <Canvas gestures={gestures} />
       <CanvasControls gestures={gestures} />
-      {state.status === 'ready' && !noticeHidden && (state.layoutFixed || (savedAs !== null && !dirty)) ? (
-        <View style={styles.notice}>
-          {state.layoutFixed ? (
-            <Banner tone="info" title="Boxes re-arranged" testID="editor-layout-fixed" action={<Button label="OK" variant="ghost" size="compact" onPress={() => setNoticeHidden(true)} testID="editor-notice-close" />}>
-              {readOnly ? 'The saved layout had overlapping boxes on this canvas, so they are shown arranged afresh.' : 'The saved layout had overlapping boxes on this canvas, so they were arranged afresh. The new layout goes with the next version you save.'}
-            </Banner>
-          ) : null}
-          {savedAs !== null && !dirty ? (
-            <Banner tone="success" testID="editor-saved" action={<Button label="OK" variant="ghost" size="compact" onPress={() => setNoticeHidden(true)} />}>
-              {`Saved as version ${savedAs}.`}
-            </Banner>
-          ) : null}
-        </View>
-      ) : null}
+      {state.status === 'ready' && !noticeHidden ? <EditorNotices layoutFixed={state.layoutFixed} savedAs={dirty ? null : savedAs} readOnly={readOnly} onClose={() => setNoticeHidden(true)} /> : null}
     </View>
   );
 
@@ -233,7 +165,4 @@ const styles = StyleSheet.create({
   canvasArea: { flex: 1, minWidth: 0 },
   palette: { width: 248, flexGrow: 0, backgroundColor: colors.surface, borderRightWidth: 1, borderRightColor: colors.line },
   paletteBody: { padding: space.md, gap: space.md },
-  notice: { position: 'absolute', left: space.md, bottom: space.md, gap: space.sm, maxWidth: 480 },
-  center: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: space.md, backgroundColor: colors.paper, padding: space.lg },
-  problem: { width: '100%', maxWidth: 480, gap: space.md },
 });
