@@ -101,6 +101,11 @@ test('the working copy survives a reload and is offered back', async ({ page }) 
   await page.getByTestId('palette-host').click();
   await page.getByTestId('palette-add-host').click();
   await expect(page.getByTestId('device-host-1')).toBeVisible();
+  // A link of the app's own navigation asks first too.
+  await page.getByTestId('nav-designs').click();
+  await expect(page.getByTestId('leave-prompt')).toBeVisible();
+  await page.getByTestId('leave-stay').click();
+  await expect(page).toHaveURL(new RegExp(`/designs/${design.id}/edit$`));
   // The copy is written a moment after the last change.
   await page.waitForTimeout(800);
   await page.reload();
