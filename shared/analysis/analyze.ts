@@ -24,8 +24,9 @@ function compareFindings(x: Finding, y: Finding): number {
 export function analyze(doc: Topology, options: AnalyzeOptions = {}): Report {
   const ctx = createContext(doc, options.failed);
   const { hosts, failures } = analyzeResilience(ctx);
-  const findings = [...redundancyFindings(ctx, hosts)];
-  for (const group of RULE_GROUPS) findings.push(...group(ctx));
+  const findings = redundancyFindings(ctx, hosts).slice();
+  // Appended one by one: spreading a long list into push() overflows the call stack.
+  for (const group of RULE_GROUPS) for (const finding of group(ctx)) findings.push(finding);
   findings.sort(compareFindings);
   return { hosts, failures, findings };
 }

@@ -127,6 +127,23 @@ describe('networks and addresses', () => {
     expect(mixed.map((f) => f.subjects)).toEqual([['na', 'nm']]);
   });
 
+  it('reports each overlapping network once, against the narrowest block that holds it', () => {
+    // CIDR blocks nest or are disjoint (RFC 4632 §3.1): 198.51.100.0/24 ⊃ .0/25 ⊃ .0/26, and .128/25 beside .0/25.
+    const nested = findings('network-overlap', (doc) => {
+      doc.networks[1].cidr = '198.51.100.0/25';
+      doc.networks.push({ id: 'nc', name: 'c', purpose: 'data', cidr: '198.51.100.0/26' });
+      doc.networks.push({ id: 'nd', name: 'd', purpose: 'data', cidr: '198.51.100.128/25' });
+    });
+    expect(nested.map((f) => f.subjects)).toEqual([['na', 'nb'], ['na', 'nd'], ['nb', 'nc']]);
+  });
+
+  it('gives n − 1 findings, not every pair, for many copies of one subnet', () => {
+    const copies = findings('network-overlap', (doc) => {
+      for (let i = 0; i < 3000; i += 1) doc.networks.push({ id: `copy-${i}`, name: `copy ${i}`, purpose: 'data', cidr: '192.0.2.0/24' });
+    });
+    expect(copies).toHaveLength(2999);
+  });
+
   it('flags addresses outside the network, reserved, duplicated, or on the gateway', () => {
     const set = (d: ReturnType<typeof twoFabrics>, port: string, ip: string) => (d.port(port).address = { mode: 'static', ip });
     expect(findings('address-outside-network', (_, d) => set(d, 'h1.c1.1', '203.0.113.10'))).toHaveLength(1); // RFC 5737 ranges differ

@@ -141,6 +141,7 @@ export function addressingFindings(ctx: AnalysisContext): Finding[] {
     if (ref.device.kind === 'switch') continue;
     portFindings(ctx, ref, ctx.index.cablesByPort.has(ref.port.id), cidrs, out);
   }
-  out.push(...gatewayFindings(ctx, cidrs), ...duplicateFindings(ctx));
+  for (const finding of gatewayFindings(ctx, cidrs)) out.push(finding);
+  for (const finding of duplicateFindings(ctx)) out.push(finding);
   return out;
 }

@@ -12,28 +12,44 @@ import { displayName } from '@/shared/topology/index';
  * set or inside a link-local range, and MTU mismatch where a data path joins networks of different
  * MTU. A network without an MTU runs the Ethernet default of 1500 (RFC 894).
  */
+function compareBlocks(x: { network: Network; block: Cidr }, y: { network: Network; block: Cidr }): number {
+  if (x.block.family !== y.block.family) return x.block.family < y.block.family ? -1 : 1;
+  if (x.block.network !== y.block.network) return x.block.network < y.block.network ? -1 : 1;
+  // The wider block first, so a block is always visited after every block that contains it.
+  return x.block.prefix - y.block.prefix || byId(x.network.id, y.network.id);
+}
+
+/**
+ * CIDR blocks either nest or are disjoint (RFC 4632 §3.1), so overlaps form a containment forest.
+ * Each network that overlaps another is reported once, with the narrowest earlier block that contains
+ * it (an equal block counts): n networks give at most n − 1 findings, found in one sweep, where listing
+ * every pair would grow with the square of the count on a document of many copies of one subnet.
+ */
 function overlapFindings(ctx: AnalysisContext): Finding[] {
   const parsed = ctx.doc.networks
     .map((network) => ({ network, block: parseCidr(network.cidr) }))
     .filter((x): x is { network: Network; block: Cidr } => x.block !== null)
-    .sort((x, y) => (x.block.family < y.block.family ? -1 : x.block.family > y.block.family ? 1 : x.block.network < y.block.network ? -1 : x.block.network > y.block.network ? 1 : 0));
+    .sort(compareBlocks);
   const out: Finding[] = [];
-  // Sweep in address order: only blocks that start before this one ends can overlap it.
-  for (let i = 0; i < parsed.length; i += 1) {
-    for (let j = i + 1; j < parsed.length; j += 1) {
-      const a = parsed[i];
-      const b = parsed[j];
-      if (a.block.family !== b.block.family || b.block.network > a.block.last) break;
-      const mixed = a.network.purpose !== b.network.purpose;
-      out.push({
-        rule: mixed ? 'management-data-same-subnet' : 'network-overlap',
-        severity: 'error',
-        subjects: [a.network.id, b.network.id],
-        message: mixed
-          ? `The ${a.network.purpose} network ${displayName(a.network)} (${a.network.cidr}) and the ${b.network.purpose} network ${displayName(b.network)} (${b.network.cidr}) share addresses.`
-          : `Networks ${displayName(a.network)} (${a.network.cidr}) and ${displayName(b.network)} (${b.network.cidr}) overlap.`,
-      });
+  const open: { network: Network; block: Cidr }[] = [];
+  for (const b of parsed) {
+    while (open.length > 0) {
+      const top = open[open.length - 1];
+      if (top.block.family === b.block.family && b.block.network <= top.block.last) break;
+      open.pop();
     }
+    const a = open[open.length - 1];
+    open.push(b);
+    if (!a) continue;
+    const mixed = a.network.purpose !== b.network.purpose;
+    out.push({
+      rule: mixed ? 'management-data-same-subnet' : 'network-overlap',
+      severity: 'error',
+      subjects: [a.network.id, b.network.id],
+      message: mixed
+        ? `The ${a.network.purpose} network ${displayName(a.network)} (${a.network.cidr}) and the ${b.network.purpose} network ${displayName(b.network)} (${b.network.cidr}) share addresses.`
+        : `Networks ${displayName(a.network)} (${a.network.cidr}) and ${displayName(b.network)} (${b.network.cidr}) overlap.`,
+    });
   }
   return out;
 }
