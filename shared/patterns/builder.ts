@@ -1,6 +1,7 @@
 import { assignAddresses } from '@/shared/address/assign';
 import type { Adapter, Cable, Connector, Controller, Media, Network, Port, PortSpeed, Topology } from '@/shared/topology/schema';
 import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
+import { layoutBands } from '@/shared/layout/bands';
 
 /**
  * The small document builder the patterns share. Ids are readable and derived from names:
@@ -66,8 +67,10 @@ export class PatternBuilder {
     return cable;
   }
 
-  place(id: string, x: number, y: number): void {
-    this.doc.layout![id] = { x, y };
+  /** Lay the devices out in bands, top first, by their drawn sizes (shared/layout/bands.ts). */
+  arrange(bands: string[][]): void {
+    const byId = new Map(this.doc.devices.map((device) => [device.id, device]));
+    this.doc.layout = layoutBands(bands.map((band) => band.map((id) => byId.get(id)!)));
   }
 
   /** Static addresses for every port on a network, lowest first, in document order (arrays first). */

@@ -1,5 +1,5 @@
 import { PatternBuilder, type PortSpec } from '@/shared/patterns/builder';
-import { COLUMN_X, controllerName, dataMedia, DEFAULTS, hostNames, ROW_Y, type PatternOptions } from '@/shared/patterns/options';
+import { controllerName, dataMedia, DEFAULTS, hostNames, type PatternOptions } from '@/shared/patterns/options';
 import type { Topology } from '@/shared/topology/schema';
 
 /**
@@ -53,9 +53,8 @@ export function directAttach(options: PatternOptions = {}): Topology {
       used[c] += 1;
       b.cable('d', `${host}.card-${s.card + 1}.p${s.port + 1}`, `${controllers[c].id}.p${used[c]}`, media, lengthOf(h));
     });
-    b.place(host, h * COLUMN_X, ROW_Y.switches);
   });
-  b.place(arrayId, (Math.max(names.length, 2) * COLUMN_X) / 2 - COLUMN_X / 2, ROW_Y.arrays);
+  b.arrange([names, [arrayId]]);
 
   if (options.assignAddresses ?? true) b.assignAddresses();
   if (options.chap) b.doc.security = { chap: options.chap };

@@ -1,11 +1,9 @@
 import { PatternBuilder, switchSize, type PortSpec } from '@/shared/patterns/builder';
 import {
-  COLUMN_X,
   controllerName,
   dataMedia,
   DEFAULTS,
   hostNames,
-  ROW_Y,
   type ManagedFabricOptions,
 } from '@/shared/patterns/options';
 import type { Topology } from '@/shared/topology/schema';
@@ -87,11 +85,7 @@ export function buildFabric(options: ManagedFabricOptions, withManagement: boole
     names.forEach((host, h) => b.cable('m', `${host}.onboard.mgmt`, b.switchPort(oob), 'cat6', lengthOf(h)));
   }
 
-  const width = Math.max(names.length, 3) * COLUMN_X;
-  b.place(arrayId, width / 2 - COLUMN_X / 2, ROW_Y.arrays);
-  const switchRow = withManagement ? [swA, swB, oob] : [swA, swB];
-  switchRow.forEach((id, i) => b.place(id, ((i + 1) * width) / (switchRow.length + 1) - COLUMN_X / 2, ROW_Y.switches));
-  names.forEach((host, h) => b.place(host, h * COLUMN_X, ROW_Y.hosts));
+  b.arrange([names, withManagement ? [swA, swB, oob] : [swA, swB], [arrayId]]);
 
   if (options.assignAddresses ?? true) b.assignAddresses();
   if (options.chap) b.doc.security = { chap: options.chap };

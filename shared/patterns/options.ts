@@ -66,5 +66,3 @@ export function controllerName(index: number): string {
   return `ctl-${String.fromCharCode(97 + index)}`;
 }
 
-export const ROW_Y = { arrays: 40, switches: 280, hosts: 520 };
-export const COLUMN_X = 200;

@@ -31,8 +31,9 @@ describe('placing a palette device', () => {
 });
 
 describe('opening a layout that overlaps on this canvas', () => {
-  it('re-arranges the demo’s pattern layout and leaves a tidy one alone', () => {
-    const demo = harborRoadV2();
+  it('re-arranges a layout whose boxes overlap and leaves a tidy one alone', () => {
+    // A hand-edited file with every device stacked on one spot.
+    const demo = { ...harborRoadV2(), layout: Object.fromEntries(harborRoadV2().devices.map((d) => [d.id, { x: 100, y: 100 }])) };
     expect(overlappingDevices(buildSnapshot(demo)).length).toBeGreaterThan(0);
     const tidy = withTidyLayout(demo);
     expect([tidy.fixed, overlappingDevices(buildSnapshot(tidy.doc))]).toEqual([true, []]);
