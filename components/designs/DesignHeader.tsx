@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import { Button, Heading, Icon, Text, space } from '@/components/ui';
 import { StatusBadge } from '@/components/designs/StatusBadge';
-import { EDITOR_READY, editorHref } from '@/lib/designs/links';
+import { editorHref } from '@/lib/designs/links';
 import type { DesignDto } from '@/shared/api/designs';
 
 type DesignHeaderProps = { design: DesignDto; editor: boolean; uploading: boolean; onUpload: () => void };
@@ -19,18 +19,21 @@ export function DesignHeader({ design, editor, uploading, onUpload }: DesignHead
         <StatusBadge status={design.status} testID="design-status" />
       </View>
       {design.site ? <Text color="inkMuted">{design.site}</Text> : null}
-      {editor ? (
-        <View style={styles.actions}>
-          {EDITOR_READY ? (
-            <Link href={editorHref(design.id)} asChild>
-              <Button label="Open in editor" testID="design-edit" />
-            </Link>
-          ) : null}
-          {!uploading ? (
-            <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
-          ) : null}
-        </View>
-      ) : null}
+      <View style={styles.actions}>
+        {editor ? (
+          <Link href={editorHref(design.id)} asChild>
+            <Button label="Open in editor" testID="design-edit" />
+          </Link>
+        ) : (
+          // Roles that may not edit see the newest version they may read on the canvas, read-only.
+          <Link href={editorHref(design.id)} asChild>
+            <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
+          </Link>
+        )}
+        {editor && !uploading ? (
+          <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
+        ) : null}
+      </View>
     </View>
   );
 }

@@ -1,12 +1,5 @@
 import type { Href } from 'expo-router';
 
-/**
- * The canvas at /designs/[id]/edit is built separately. Until it ships, "Open in editor" stays
- * hidden so no link leads nowhere; the canvas flips this one constant when its route exists.
- * The route exists (app/(app)/designs/[id]/edit.tsx).
- */
-export const EDITOR_READY = true;
-
 export const newDesignHref: Href = '/designs/new';
 
 export function designHref(id: number, version?: number): Href {
@@ -27,7 +20,7 @@ export function diffHref(id: number, from: number, to: number): Href {
   return { pathname: '/designs/[id]/diff', params: { id, from, to } };
 }
 
-/** Typed loosely on purpose: the canvas owns this route, and generated route types may lag behind it. */
+/** The canvas (editable or read-only by role). Typed loosely: generated route types may lag behind the route. */
 export function editorHref(id: number): Href {
   return `/designs/${id}/edit` as Href;
 }

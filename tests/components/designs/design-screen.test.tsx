@@ -85,6 +85,18 @@ describe('design screen', () => {
     expect(screen.queryByTestId('design-upload')).toBeNull();
     expect(screen.queryByTestId('review-submit')).toBeNull();
   });
+
+  it('opens the canvas for editing to a designer and read-only to a reviewer', async () => {
+    renderDesign(people.designer, 1440);
+    await screen.findByTestId('version-panel');
+    expect(screen.getByTestId('design-edit')).toBeTruthy();
+    expect(screen.queryByTestId('design-view-canvas')).toBeNull();
+    screen.unmount();
+    renderDesign(people.reviewer, 1440);
+    await screen.findByTestId('version-panel');
+    expect(screen.getByTestId('design-view-canvas')).toBeTruthy();
+    expect(screen.queryByTestId('design-edit')).toBeNull();
+  });
 });
 
 describe('upload a document as a new version', () => {
