@@ -7,6 +7,7 @@ import type { Topology } from '@/shared/topology/schema';
 import { withTidyLayout } from '@/lib/editor/tidy';
 import { emptyTopology, editorStore } from '@/lib/editor/store';
 import { clearWorkingCopy, defaultStorage, readWorkingCopy, type WorkingCopy } from '@/lib/editor/working-copy';
+import { sameDocument } from '@/shared/topology/canonical';
 
 /**
  * Opening a design in the editor: the design, its newest version's document, and the working copy
@@ -56,7 +57,12 @@ export function useEditorSession(designId: number) {
       return;
     }
     const storage = defaultStorage();
-    const copy = storage && !readOnly ? readWorkingCopy(storage, designId) : null;
+    let copy = storage && !readOnly ? readWorkingCopy(storage, designId) : null;
+    if (copy && storage && copy.baseVersion === latest && sameDocument(copy.doc, serverDoc)) {
+      // Nothing in it that the server does not already hold: no question to ask.
+      clearWorkingCopy(storage, designId);
+      copy = null;
+    }
     if (copy) setState({ status: 'restore', copy, serverDoc, latest });
     else open(serverDoc, latest);
   }, [designId, serverDoc, me.data, latest, readOnly, open]);

@@ -115,6 +115,11 @@ export function attachWorkingCopy(store: EditorStore, storage: KeyValueStorage, 
     }
     if (state.doc === previous.doc && state.savedDoc === previous.savedDoc) return;
     cancel();
+    if (state.savedDoc !== previous.savedDoc) {
+      // A save is one discrete step: clear (or rewrite) at once, so a reload right after it finds no stale copy.
+      persist(state);
+      return;
+    }
     timer = setTimeout(() => {
       timer = null;
       persist(store.getState());

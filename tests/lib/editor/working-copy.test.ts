@@ -77,6 +77,8 @@ describe('keeping the store\'s working copy', () => {
     expect(readWorkingCopy(storage, 5)?.doc.layout!['host-1']).toEqual({ x: 90, y: 0 });
     expect(readWorkingCopy(storage, 5)?.baseVersion).toBe(4);
     store.getState().markSaved(5);
+    // At once, not after the pause: a reload right after saving must find no stale copy to offer.
+    expect(readWorkingCopy(storage, 5)).toBeNull();
     jest.advanceTimersByTime(300);
     expect(readWorkingCopy(storage, 5)).toBeNull();
     detach();
