@@ -27,7 +27,7 @@ function overlaps(list: Box[]): string[] {
 
 const designs: [string, Topology][] = [
   ['direct attach, 4 hosts', directAttach({ hosts: 4 })],
-  ['direct attach, 2 hosts of 3 cards × 4 ports', directAttach({ hosts: 2, cards: 3, portsPerCard: 4 })],
+  ['direct attach, 2 hosts of 3 cards × 4 ports', directAttach({ hosts: 2, cardsPerHost: 3, portsPerCard: 4 })],
   ['dual fabric, 12 hosts', dualFabric({ hosts: 12 })],
   ['dual fabric with management, 40 hosts', dualFabricWithManagement({ hosts: 40 })],
   ['the Harbor Road demo', v1 as Topology],
