@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
-import { Badge, Banner, Button, Card, Icon, Screen, Text, space } from '@/components/ui';
+import { Badge, Banner, Button, Card, Icon, LabeledValue, Screen, Text, space } from '@/components/ui';
 import { roleTone } from '@/components/team/roleTone';
 import { useMe, useSignOut } from '@/lib/api/auth';
 import { useTeam } from '@/lib/api/team';
@@ -16,15 +16,15 @@ export function AccountScreen() {
   return (
     <Screen title="Account" intro="Who you are signed in as, and in which team." testID="account-screen">
       <Card>
-        <Row label="Name" value={user.name} testID="account-name" />
-        <Row label="E-mail" value={user.email} testID="account-email" />
+        <LabeledValue label="Name" value={user.name} testID="account-name" />
+        <LabeledValue label="E-mail" value={user.email} testID="account-email" />
         <View style={styles.row}>
           <Text variant="small" color="inkMuted">
             Role
           </Text>
           <Badge label={roleLabel(user.role)} tone={roleTone[user.role]} testID="account-role" />
         </View>
-        <Row label="Team" value={team.data?.team.name ?? '…'} testID="account-team" />
+        <LabeledValue label="Team" value={team.data?.team.name ?? '…'} testID="account-team" />
       </Card>
       {signOut.isError ? (
         <Banner tone="error" title="Still signed in">
@@ -46,18 +46,6 @@ export function AccountScreen() {
   );
 }
 
-function Row({ label, value, testID }: { label: string; value: string; testID: string }) {
-  return (
-    <View style={styles.row}>
-      <Text variant="small" color="inkMuted">
-        {label}
-      </Text>
-      <Text variant="bodyStrong" testID={testID}>
-        {value}
-      </Text>
-    </View>
-  );
-}
 
 const styles = StyleSheet.create({
   row: { gap: 2 },

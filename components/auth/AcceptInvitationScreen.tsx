@@ -2,7 +2,7 @@ import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import { AuthFrame } from '@/components/auth/AuthFrame';
 import { AcceptInvitationForm } from '@/components/auth/AcceptInvitationForm';
-import { Badge, Banner, Button, Card, Heading, Text, colors, space } from '@/components/ui';
+import { Badge, Banner, Button, Card, Heading, LabeledValue, Text, colors, space } from '@/components/ui';
 import { roleTone } from '@/components/team/roleTone';
 import { useMe } from '@/lib/api/auth';
 import { useInvitationPreview } from '@/lib/api/team';
@@ -20,8 +20,8 @@ export function AcceptInvitationScreen({ token }: { token: string }) {
         {preview.data ? (
           <>
             <View style={styles.facts}>
-              <Fact label="Team" value={preview.data.teamName} testID="invitation-team" />
-              <Fact label="E-mail" value={preview.data.email} testID="invitation-email" />
+              <LabeledValue label="Team" value={preview.data.teamName} testID="invitation-team" />
+              <LabeledValue label="E-mail" value={preview.data.email} testID="invitation-email" />
               <View style={styles.fact}>
                 <Text variant="small" color="inkMuted">
                   Role
@@ -45,18 +45,6 @@ export function AcceptInvitationScreen({ token }: { token: string }) {
   );
 }
 
-function Fact({ label, value, testID }: { label: string; value: string; testID: string }) {
-  return (
-    <View style={styles.fact}>
-      <Text variant="small" color="inkMuted">
-        {label}
-      </Text>
-      <Text variant="bodyStrong" testID={testID}>
-        {value}
-      </Text>
-    </View>
-  );
-}
 
 /** The server's own sentence says why (used, withdrawn, expired); the way out is sign-in or a new link. */
 function InvitationUnavailable({ message }: { message: string }) {

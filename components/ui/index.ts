@@ -9,6 +9,7 @@ export { Icon, type IconName } from '@/components/ui/icons';
 export { Screen } from '@/components/ui/Screen';
 export { SegmentedPicker, type PickerOption } from '@/components/ui/SegmentedPicker';
 export { Tabs, type TabOption } from '@/components/ui/Tabs';
+export { LabeledValue } from '@/components/ui/LabeledValue';
 export { Heading, Text } from '@/components/ui/Text';
 export { TextField } from '@/components/ui/TextField';
 export * from '@/components/ui/tokens';
