@@ -5,14 +5,26 @@ import { controllerShortName, type Namer } from '@/lib/report/names';
 import type { HostRow } from '@/lib/report/view';
 import type { TopologyIndex } from '@/shared/topology';
 
-type HostAccessProps = { rows: readonly HostRow[]; namer: Namer; index: TopologyIndex };
+/** `unreached`: hosts with data ports that reach no array even before any simulated failure. */
+type HostAccessProps = { rows: readonly HostRow[]; unreached: readonly string[]; namer: Namer; index: TopologyIndex };
 
 /** Per host and array: sessions, controllers reached and every single point of failure by name. */
-export function HostAccess({ rows, namer, index }: HostAccessProps) {
+export function HostAccess({ rows, unreached, namer, index }: HostAccessProps) {
   return (
     <Card testID="report-hosts">
       <Heading level={2}>Hosts and arrays</Heading>
-      {rows.length === 0 ? (
+      {unreached.map((host) => (
+        <View key={host} style={[styles.row, styles.lost]} testID={`report-unreached-${host}`}>
+          <View style={styles.head}>
+            <Text variant="bodyStrong">{namer.device(host)}</Text>
+            <Badge label="No storage access" tone="danger" />
+          </View>
+          <Text variant="small" color="dangerText">
+            No data path reaches a controller of any array: check its cables and the networks of its ports.
+          </Text>
+        </View>
+      ))}
+      {rows.length === 0 && unreached.length === 0 ? (
         <Text color="inkMuted">No host reaches an array, so there are no storage paths to test.</Text>
       ) : (
         rows.map((row) => <HostAccessRow key={`${row.host}-${row.array}`} row={row} namer={namer} index={index} />)

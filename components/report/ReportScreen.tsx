@@ -16,7 +16,7 @@ import { designHref } from '@/lib/designs/links';
 import { installPrintStyles, printHidden, printPage } from '@/lib/print';
 import { createNamer } from '@/lib/report/names';
 import { failureUnits } from '@/lib/report/units';
-import { hostRows } from '@/lib/report/view';
+import { hostRows, hostsWithoutAccess } from '@/lib/report/view';
 import { indexTopology } from '@/shared/topology';
 
 /**
@@ -44,6 +44,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_BREAKPOINT;
   const rows = baseline ? hostRows(baseline.report, whatIf.simulated?.report ?? null) : [];
+  const unreached = useMemo(() => (doc && baseline ? hostsWithoutAccess(doc, baseline.report) : []), [doc, baseline]);
 
   return (
     <Screen testID="report-screen" maxWidth={1280}>
@@ -76,7 +77,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
               ) : null}
             </View>
             <View style={wide ? styles.main : styles.stack}>
-              <HostAccess rows={rows} namer={lookups.namer} index={lookups.index} />
+              <HostAccess rows={rows} unreached={unreached} namer={lookups.namer} index={lookups.index} />
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
             </View>

@@ -1,5 +1,6 @@
 import type { Finding, HostArrayResult, Report, Severity } from '@/shared/analysis/types';
 import { compareAccess, type PairImpact } from '@/lib/report/whatif';
+import type { Topology } from '@/shared/topology/schema';
 
 /**
  * The report's host rows: one per host and array the baseline reaches. With a simulation each row
@@ -19,6 +20,19 @@ export function hostRows(baseline: Report, simulated: Report | null): HostRow[] 
     ? compareAccess(baseline, simulated)
     : baseline.hosts.map((before) => ({ host: before.host, array: before.array, before, after: before, effect: null }));
   return rows.map((row, i) => ({ row, i })).sort((x, y) => weight(x.row) - weight(y.row) || x.i - y.i).map(({ row }) => row);
+}
+
+/**
+ * Hosts with a data port that reach no array at all. `hosts[]` only lists pairs with sessions, so
+ * without this a host cabled to nothing would simply be missing from the report's host list.
+ */
+export function hostsWithoutAccess(doc: Topology, report: Report): string[] {
+  const reached = new Set(report.hosts.map((pair) => pair.host));
+  return doc.devices
+    .filter((d) => d.kind === 'host' && d.adapters.some((a) => a.ports.some((p) => p.role === 'data')))
+    .map((d) => d.id)
+    .filter((id) => !reached.has(id))
+    .sort();
 }
 
 export const SEVERITY_ORDER: readonly Severity[] = ['error', 'warning', 'info'];

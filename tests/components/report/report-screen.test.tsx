@@ -13,8 +13,7 @@ jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNo
 const get = api.get as jest.Mock;
 
 /** The server's answers for version n of Harbor Road: the document and the report of `analyze`. */
-function serve(n: 1 | 2) {
-  const doc = n === 1 ? docs.v1 : docs.v2;
+function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
   const report = analyze(doc);
   get.mockImplementation(async (path: string) => {
     if (path === `/api/designs/1/versions/${n}`) return { version: versionDetail({ number: n, doc }) };
@@ -25,8 +24,8 @@ function serve(n: 1 | 2) {
   return { doc, report };
 }
 
-function renderReport(n: 1 | 2) {
-  const served = serve(n);
+function renderReport(n: 1 | 2, doc?: Topology) {
+  const served = serve(n, doc);
   renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer });
   return served;
 }
@@ -132,5 +131,17 @@ describe('failure report', () => {
     expect(within(results).getByTestId('whatif-add-cam-rec-2.card-1')).toBeOnTheScreen();
     expect(within(results).getByTestId('whatif-add-cable-a-10')).toBeOnTheScreen();
     expect(within(results).queryByTestId('whatif-add-fab-b')).toBeNull();
+  });
+
+  it('lists a host that reaches no array at all, which the per-pair rows cannot show', async () => {
+    // Version 2 with every cable of wms-db-1 pulled: the host keeps its data ports but no path.
+    const doc: Topology = { ...docs.v2, cables: docs.v2.cables.filter((c) => !`${c.a} ${c.b}`.includes('wms-db-1.')) };
+    const { report } = renderReport(2, doc);
+    expect(report.hosts.some((h) => h.host === 'wms-db-1')).toBe(false);
+    const row = await screen.findByTestId('report-unreached-wms-db-1');
+    expect(row).toHaveTextContent(/No storage access/);
+    // The hosts that still reach vault-1 are not listed as unreached.
+    expect(screen.queryByTestId('report-unreached-wms-db-2')).toBeNull();
+    expect(screen.getByTestId('report-host-wms-db-2')).toBeOnTheScreen();
   });
 });
