@@ -2,11 +2,13 @@ import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { useStore } from 'zustand';
 import { Text, colors, space, TAP_TARGET } from '@/components/ui';
-import { useEditorDoc, useSelection } from '@/lib/editor/hooks';
+import { useEditorDoc, usePendingCableStart, useSelection } from '@/lib/editor/hooks';
+import { subjectLabel } from '@/lib/editor/describe';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
 import { Inspector, inspectorTitle } from '@/components/inspector/Inspector';
 import { BottomSheet } from '@/components/editor/BottomSheet';
+import { CablingStrip } from '@/components/editor/CablingStrip';
 import { FindingsPanel } from '@/components/editor/FindingsPanel';
 import { Palette } from '@/components/editor/Palette';
 
@@ -41,11 +43,17 @@ export function SidePanels() {
 
 type PhoneSheetsProps = { sheet: null | 'add' | 'findings'; onSheet: (sheet: null | 'add' | 'findings') => void; hasSelection: boolean };
 
-/** The phone's sheets: the palette or findings when asked for, else the inspector while something is selected. */
+/**
+ * The phone's sheets: the palette or findings when asked for; while a cable is being started from the
+ * selected port, a short strip that leaves the canvas free; else the inspector while something is selected.
+ */
 export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) {
   const [expanded, setExpanded] = useState(false);
+  // The port whose settings the designer asked for while cabling from it; another port starts as a strip again.
+  const [detailsFor, setDetailsFor] = useState<string | null>(null);
   const doc = useEditorDoc();
   const selection = useSelection();
+  const pending = usePendingCableStart();
   const toggle = () => setExpanded(!expanded);
   if (sheet === 'add') {
     return (
@@ -62,8 +70,17 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
     );
   }
   if (!hasSelection) return null;
+  // Closing also ends a cable begun from the selected port, so a later tap cannot finish a hidden one.
+  const close = () => {
+    editorStore.getState().cancelCable();
+    editorStore.getState().clearSelection();
+    setDetailsFor(null);
+  };
+  if (pending && selection.length === 1 && selection[0] === pending && detailsFor !== pending) {
+    return <CablingStrip from={subjectLabel(doc, pending)} onDetails={() => setDetailsFor(pending)} onStop={close} />;
+  }
   return (
-    <BottomSheet title={inspectorTitle(doc, selection)} expanded={expanded} onToggle={toggle} onClose={() => editorStore.getState().clearSelection()} testID="sheet-inspector">
+    <BottomSheet title={inspectorTitle(doc, selection)} expanded={expanded} onToggle={toggle} onClose={close} testID="sheet-inspector">
       <Inspector showTitle={false} />
     </BottomSheet>
   );

@@ -32,3 +32,33 @@ test('on a phone: open the demo design, select a host, rename it in the bottom s
   await expect(page.getByTestId('sheet-findings')).toBeVisible();
   await shot(page, testInfo, 'canvas-phone-findings');
 });
+
+test('on a phone: cabling from a port leaves the canvas free for the other end', async ({ page }, testInfo) => {
+  await signIn(page, 'ravi@tidewater.example');
+  await openEditor(page, await designIdByName(page, 'Harbor Road storage'));
+  // wms-db-1 card-1 p2 and fab-a p11 are free in the demo's version 2.
+  await page.getByTestId('port-wms-db-1.card-1.p2').tap();
+  const strip = page.getByTestId('cabling-strip');
+  await expect(strip).toContainText('Cabling from wms-db-1');
+  await expect(page.getByTestId('sheet-inspector')).toHaveCount(0);
+  // The strip is short: the other port is not under it, so a tap reaches the canvas.
+  const [stripBox, portBox] = [await strip.boundingBox(), await page.getByTestId('port-fab-a.p11').boundingBox()];
+  expect(stripBox!.height).toBeLessThan(844 / 4);
+  expect(portBox!.y + portBox!.height).toBeLessThan(stripBox!.y);
+  await shot(page, testInfo, 'canvas-phone-cabling');
+  await page.getByTestId('port-fab-a.p11').tap();
+  await expect(page.getByTestId('cable-chooser')).toBeVisible();
+  await page.getByTestId('cable-chooser-confirm').tap();
+  await expect(page.getByTestId('port-fab-a.p11')).toHaveAttribute('aria-label', /cabled/);
+  await expect(page.getByTestId('editor-status')).toContainText('Unsaved');
+
+  // The port's settings are one tap away; Stop cabling ends the cable and the selection.
+  await page.getByTestId('port-wms-db-1.card-2.p2').tap();
+  await page.getByTestId('cabling-strip-details').tap();
+  await expect(page.getByTestId('sheet-inspector')).toContainText('wms-db-1');
+  await page.getByTestId('sheet-inspector-close').tap();
+  await page.getByTestId('port-wms-db-1.card-2.p2').tap();
+  await page.getByTestId('cabling-strip-stop').tap();
+  await expect(page.getByTestId('cabling-strip')).toHaveCount(0);
+  await expect(page.getByTestId('sheet-inspector')).toHaveCount(0);
+});

@@ -1,0 +1,43 @@
+import { StyleSheet, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+import { Button, Text, colors, radius, space } from '@/components/ui';
+
+type CablingStripProps = { from: string; onDetails: () => void; onStop: () => void };
+
+/**
+ * The phone's sheet while a cable is being drawn: one short bar, so the port at the other end stays
+ * on screen to be tapped. The port's settings are one tap away.
+ */
+export function CablingStrip({ from, onDetails, onStop }: CablingStripProps) {
+  const insets = useSafeAreaInsets();
+  return (
+    <View style={[styles.strip, { paddingBottom: insets.bottom + space.sm }]} role="region" aria-label="Cabling" testID="cabling-strip">
+      <Text variant="small" testID="cabling-strip-text">
+        {`Cabling from ${from}: tap the port at the other end.`}
+      </Text>
+      <View style={styles.actions}>
+        <Button label="Port settings" variant="secondary" size="compact" onPress={onDetails} testID="cabling-strip-details" />
+        <Button label="Stop cabling" variant="ghost" size="compact" onPress={onStop} testID="cabling-strip-stop" />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  strip: {
+    position: 'absolute',
+    left: 0,
+    right: 0,
+    bottom: 0,
+    gap: space.sm,
+    paddingTop: space.md,
+    paddingHorizontal: space.lg,
+    backgroundColor: colors.surface,
+    borderTopLeftRadius: radius.lg,
+    borderTopRightRadius: radius.lg,
+    borderTopWidth: 1,
+    borderColor: colors.lineStrong,
+    zIndex: 10,
+  },
+  actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+});
