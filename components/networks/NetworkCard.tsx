@@ -8,13 +8,21 @@ import { FindingsAbout } from '@/components/inspector/FindingsAbout';
 import { runEdit } from '@/components/inspector/run';
 import { useStore } from 'zustand';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { useEditorDoc } from '@/lib/editor/hooks';
+import type { Finding } from '@/shared/analysis/types';
 
 export const PURPOSE_CHIPS = NETWORK_PURPOSES.map((p) => ({ value: p, label: p === 'data' ? 'Storage data' : 'Management' }));
 
-/** The finding of one rule about this network, to show under the field it is about. */
+/**
+ * The finding of one rule about this network's own value, to show under the field it is about. A
+ * finding that also names a port is about that port's address (it is listed with the network's
+ * findings below), except a duplicate, which names the network only when its gateway is the other holder.
+ */
 function useNote(networkId: string, rules: string[]): string | null {
   const findings = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(networkId));
-  return findings?.find((f) => rules.includes(f.rule))?.message ?? null;
+  const networks = useEditorDoc().networks;
+  const aboutNetworksOnly = (f: Finding) => f.subjects.every((id) => networks.some((n) => n.id === id));
+  return findings?.find((f) => rules.includes(f.rule) && (f.rule === 'address-duplicate' || aboutNetworksOnly(f)))?.message ?? null;
 }
 
 type Props = { network: Network; ports: number; readOnly: boolean };
@@ -26,7 +34,7 @@ export function NetworkCard({ network, ports, readOnly }: Props) {
   const blockNote = useNote(network.id, ['network-overlap', 'management-data-same-subnet']);
   const vlanNote = useNote(network.id, ['vlan-out-of-range']);
   const mtuNote = useNote(network.id, ['mtu-out-of-range', 'mtu-mismatch']);
-  const gatewayNote = useNote(network.id, ['address-outside-network', 'address-duplicate']);
+  const gatewayNote = useNote(network.id, ['address-outside-network', 'address-reserved', 'address-duplicate']);
   return (
     <Card testID={id}>
       <View style={styles.head}>

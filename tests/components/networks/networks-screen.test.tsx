@@ -37,6 +37,30 @@ describe('networks and addresses', () => {
     expect(screen.getByTestId(`network-${id}-vlan-error`)).toHaveTextContent(/4095/);
   });
 
+  it("puts a port's address outside the network on the port, not under the network's gateway", () => {
+    const port = 'wms-db-1.card-1.p1';
+    const network = doc().networks.find((n) => n.id === harborRoadV2().devices.flatMap((d) => (d.kind === 'host' ? d.adapters.flatMap((a) => a.ports) : [])).find((p) => p.id === port)!.networkId)!;
+    // An address of fabric B's block (RFC 5737 TEST-NET-3, 203.0.113.0/24) on a fabric A port (198.51.100.0/24).
+    act(() => {
+      editorStore.getState().run('setPort', { id: port, address: { mode: 'static', ip: '203.0.113.9' } });
+      analyseNow(liveAnalysisStore, doc());
+    });
+    render(<NetworksScreen wide />);
+    expect(liveAnalysisStore.getState().report!.findings.some((f) => f.rule === 'address-outside-network' && f.subjects.includes(network.id))).toBe(true);
+    expect(screen.queryByTestId(`network-${network.id}-gateway-error`)).toBeNull();
+    expect(screen.getByTestId(`network-${network.id}`)).toHaveTextContent(/203\.0\.113\.9, which is outside/);
+  });
+
+  it("shows a gateway outside the network's block under the gateway field", () => {
+    const id = doc().networks[0].id;
+    render(<NetworksScreen wide />);
+    // fabric A is 198.51.100.0/24 (RFC 5737 TEST-NET-2); 203.0.113.254 lies in TEST-NET-3, outside it.
+    fireEvent.changeText(screen.getByTestId(`network-${id}-gateway`), '203.0.113.254');
+    fireEvent(screen.getByTestId(`network-${id}-gateway`), 'blur');
+    act(() => analyseNow(liveAnalysisStore, doc()));
+    expect(screen.getByTestId(`network-${id}-gateway-error`)).toHaveTextContent(/gateway 203\.0\.113\.254 of fabric A is outside 198\.51\.100\.0\/24/);
+  });
+
   it('flags a duplicate address in the table with words and an icon, from the report', () => {
     const [a, b] = ['wms-db-1.card-1.p1', 'wms-db-2.card-1.p1'];
     const ip = '198.51.100.5';
