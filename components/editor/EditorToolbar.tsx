@@ -4,6 +4,8 @@ import { useStore } from 'zustand';
 import { Text, colors, space } from '@/components/ui';
 import { useBaseVersion, useCanRedo, useCanUndo, useDirty, useEditorDoc, useReadOnly, useSelection } from '@/lib/editor/hooks';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { plural } from '@/lib/designs/summary';
+import type { Finding } from '@/shared/analysis/types';
 import { editorStore } from '@/lib/editor/store';
 import { IconButton } from '@/components/editor/IconButton';
 import { arrange, deleteSelection, downloadDiagram } from '@/components/editor/editor-actions';
@@ -23,16 +25,23 @@ type ToolbarProps = {
   paletteOpen: boolean;
 };
 
+/** The same words as the findings list: problems are errors; warnings only when there are some. */
+function findingCounts(findings: readonly Finding[]): string {
+  const error = findings.filter((f) => f.severity === 'error').length;
+  const warning = findings.filter((f) => f.severity === 'warning').length;
+  return `${plural(error, 'problem')}${warning > 0 ? `, ${plural(warning, 'warning')}` : ''}`;
+}
+
 function Status() {
   const dirty = useDirty();
   const readOnly = useReadOnly();
   const base = useBaseVersion();
-  const errors = useStore(liveAnalysisStore, (s) => s.report?.findings.filter((f) => f.severity === 'error').length ?? null);
+  const counts = useStore(liveAnalysisStore, (s) => (s.report ? findingCounts(s.report.findings) : null));
   const version = base === null ? 'no version yet' : `version ${base}`;
   const state = readOnly ? `Read-only · ${version}` : dirty ? (base === null ? 'Unsaved · no version yet' : `Unsaved · on ${version}`) : base === null ? 'No version saved yet' : `Saved · ${version}`;
   return (
     <Text variant="caption" color={dirty && !readOnly ? 'copper' : 'inkMuted'} numberOfLines={1} testID="editor-status">
-      {`${dirty && !readOnly ? '● ' : ''}${state}${errors === null ? '' : ` · ${errors} problem${errors === 1 ? '' : 's'}`}`}
+      {`${dirty && !readOnly ? '● ' : ''}${state}${counts === null ? '' : ` · ${counts}`}`}
     </Text>
   );
 }
