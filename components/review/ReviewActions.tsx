@@ -6,6 +6,11 @@ import { commentProblem, overrideSentence, type ReviewOptions } from '@/lib/desi
 import { describeFailure } from '@/lib/forms';
 import type { ReviewAction } from '@/shared/api/designs';
 
+function commentHint(options: ReviewOptions): string {
+  if (options.submit) return 'Optional: a note for the reviewer';
+  return options.overrideErrors ? 'Needed to ask for changes, and to approve despite the errors' : 'Needed when you ask for changes';
+}
+
 type ReviewActionsProps = { designId: number; number: number; options: ReviewOptions };
 
 /** The comment field and the steps this person may take on this version. */
@@ -34,7 +39,7 @@ export function ReviewActions({ designId, number, options }: ReviewActionsProps)
       ) : null}
       <TextField
         label="Comment"
-        hint={options.submit ? 'Optional: a note for the reviewer' : 'Needed when you ask for changes'}
+        hint={commentHint(options)}
         value={comment}
         onChangeText={setComment}
         multiline

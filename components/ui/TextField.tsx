@@ -28,7 +28,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
         {label}
       </Text>
       {hint ? (
-        <Text variant="small" color="inkMuted" nativeID={`${id}-hint`}>
+        <Text variant="small" color="inkMuted" nativeID={`${id}-hint`} testID={testID ? `${testID}-hint` : undefined}>
           {hint}
         </Text>
       ) : null}

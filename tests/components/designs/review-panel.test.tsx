@@ -77,6 +77,8 @@ describe('review panel', () => {
     const errors = flawedInReview.summary.errors;
     expect(errors).toBeGreaterThan(0);
     expect(screen.getByTestId('review-override-warning')).toHaveTextContent(new RegExp(`found ${errors} errors? in this version`));
+    // The field's hint agrees with the banner: here approving needs a comment too.
+    expect(screen.getByTestId('review-comment-hint')).toHaveTextContent(/approve despite the errors/);
     fireEvent.press(screen.getByTestId('review-approve'));
     expect(screen.getByTestId('review-comment-error')).toHaveTextContent(`Explain why you approve a version with ${errors} error${errors === 1 ? '' : 's'}`);
     expect(post).not.toHaveBeenCalled();
