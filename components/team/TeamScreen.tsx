@@ -8,7 +8,7 @@ import { useTeam } from '@/lib/api/team';
 
 export function TeamScreen() {
   const me = useMe();
-  const team = useTeam();
+  const team = useTeam({ fresh: true });
   const invitations = team.data?.invitations ?? [];
   return (
     <Screen title="Team" intro={team.data ? `People in ${team.data.team.name} and what each may do.` : undefined} testID="team-screen">

@@ -14,12 +14,17 @@ export const teamKeys = {
 /** Membership changes rarely and only by admins; a minute keeps the screens calm without going stale. */
 export const TEAM_STALE_MS = 60_000;
 
-export function useTeam(options: { enabled?: boolean } = {}) {
+/**
+ * `fresh`: ask the server again whenever the screen opens (the Team screen: someone may have accepted
+ * an invitation since), while the shell's copy for the team's name stays calm.
+ */
+export function useTeam(options: { enabled?: boolean; fresh?: boolean } = {}) {
   return useQuery({
     queryKey: teamKeys.current(),
     queryFn: () => api.get<TeamResponse>('/api/team'),
     staleTime: TEAM_STALE_MS,
     enabled: options.enabled ?? true,
+    refetchOnMount: options.fresh ? 'always' : true,
   });
 }
 
