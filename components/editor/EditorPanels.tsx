@@ -58,7 +58,7 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
   if (sheet === 'add') {
     return (
       <BottomSheet title="Add to the canvas" expanded onToggle={toggle} onClose={() => onSheet(null)} testID="sheet-add">
-        <Palette onAdded={() => onSheet(null)} />
+        <Palette showTitle={false} onAdded={() => onSheet(null)} />
       </BottomSheet>
     );
   }

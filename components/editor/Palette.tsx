@@ -52,13 +52,16 @@ function PaletteItem({ template, open, onToggle, onAdded }: { template: Template
 }
 
 /** The palette: each template with its counts, and pattern starters. */
-export function Palette({ onAdded }: { onAdded?: () => void }) {
+/** `showTitle`: false inside the phone's sheet, whose own header already says it. */
+export function Palette({ onAdded, showTitle = true }: { onAdded?: () => void; showTitle?: boolean }) {
   const [open, setOpen] = useState<string | null>(null);
   return (
     <View style={styles.wrap} testID="palette">
-      <Heading level={2} variant="bodyStrong">
-        Add to the canvas
-      </Heading>
+      {showTitle ? (
+        <Heading level={2} variant="bodyStrong">
+          Add to the canvas
+        </Heading>
+      ) : null}
       {TEMPLATES.map((t) => (
         <PaletteItem key={t.id} template={t} open={open === t.id} onToggle={() => setOpen(open === t.id ? null : t.id)} onAdded={() => onAdded?.()} />
       ))}

@@ -15,7 +15,7 @@ import { useVersion, useVersionReport } from '@/lib/api/versions';
 import { designHref } from '@/lib/designs/links';
 import { installPrintStyles, printHidden, printPage } from '@/lib/print';
 import { createNamer } from '@/lib/report/names';
-import { failureUnits } from '@/lib/report/units';
+import { failureUnits, searchHint } from '@/lib/report/units';
 import { hostRows, hostsWithoutAccess } from '@/lib/report/view';
 import { indexTopology } from '@/shared/topology';
 
@@ -33,7 +33,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
   const lookups = useMemo(() => {
     if (!doc) return null;
     const index = indexTopology(doc);
-    return { index, namer: createNamer(doc, index), units: failureUnits(doc, index) };
+    return { index, namer: createNamer(doc, index), units: failureUnits(doc, index), hint: searchHint(doc) };
   }, [doc]);
   useEffect(installPrintStyles, []);
 
@@ -65,7 +65,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
           <ReportHeadline summary={shown.summary} simulatedWith={whatIf.simulated ? failedNames : null} />
           <View style={wide ? styles.columns : styles.stack}>
             <View style={wide ? styles.side : styles.stack}>
-              <WhatIfPanel units={lookups.units} failed={whatIf.failed} onChange={whatIf.setFailed} />
+              <WhatIfPanel units={lookups.units} hint={lookups.hint} failed={whatIf.failed} onChange={whatIf.setFailed} />
               {whatIf.simulated ? (
                 <WhatIfImpact
                   failedNames={failedNames}

@@ -6,12 +6,14 @@ import { printHidden } from '@/lib/print';
 
 type WhatIfPanelProps = {
   units: readonly FailureUnit[];
+  /** The search field's hint, with examples from the open design. */
+  hint: string;
   failed: readonly string[];
   onChange: (failed: string[]) => void;
 };
 
 /** Pick units to fail, by searching their names; the report below is recomputed with them failed. */
-export function WhatIfPanel({ units, failed, onChange }: WhatIfPanelProps) {
+export function WhatIfPanel({ units, hint, failed, onChange }: WhatIfPanelProps) {
   const [query, setQuery] = useState('');
   const found = useMemo(() => searchUnits(units, query).filter((u) => !failed.includes(u.id)), [units, query, failed]);
   const byId = useMemo(() => new Map(units.map((u) => [u.id, u])), [units]);
@@ -24,7 +26,7 @@ export function WhatIfPanel({ units, failed, onChange }: WhatIfPanelProps) {
       </Text>
       <TextField
         label="Find a unit to fail"
-        hint="A name, label or host: fab-a, HR-A-10, cam-rec-2 card"
+        hint={hint}
         value={query}
         onChangeText={setQuery}
         autoCapitalize="none"

@@ -50,3 +50,12 @@ export function searchUnits(units: readonly FailureUnit[], query: string, limit 
   }
   return found;
 }
+
+/** The search hint's examples, taken from the open design: a switch, a cable's label and a host's cards. */
+export function searchHint(doc: Topology): string {
+  const sw = doc.devices.find((d) => d.kind === 'switch');
+  const host = doc.devices.find((d) => d.kind === 'host');
+  const cable = doc.cables[0];
+  const examples = [sw && displayName(sw), cable && (cable.label ?? cable.id), host && `${displayName(host)} card`].filter((e): e is string => Boolean(e));
+  return examples.length > 0 ? `A name, label or host, such as ${examples.join(', ')}` : 'A name, label or host';
+}

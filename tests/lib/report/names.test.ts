@@ -1,5 +1,5 @@
 import { createNamer, cutOffPhrases } from '@/lib/report/names';
-import { failureUnits, searchUnits } from '@/lib/report/units';
+import { failureUnits, searchHint, searchUnits } from '@/lib/report/units';
 import { analyze } from '@/shared/analysis/analyze';
 import { harborRoadV1 } from '@/shared/fixtures/harbor-road';
 import { directAttach } from '@/shared/patterns';
@@ -71,5 +71,18 @@ describe('what-if unit search', () => {
   it('finds nothing for an empty query and caps a broad one', () => {
     expect(searchUnits(units, '   ')).toEqual([]);
     expect(searchUnits(units, 'cable', 5)).toHaveLength(5);
+  });
+});
+
+describe('the what-if search hint', () => {
+  it('gives examples from the open design, each of which finds a unit to fail', () => {
+    for (const design of [doc, directAttach({ hosts: 3 })]) {
+      const hint = searchHint(design);
+      const examples = hint.replace(/^A name, label or host, such as /, '').split(', ');
+      expect(examples).toHaveLength(design.devices.some((d) => d.kind === 'switch') ? 3 : 2);
+      const units = failureUnits(design);
+      for (const example of examples) expect(searchUnits(units, example).length).toBeGreaterThan(0);
+    }
+    expect(searchHint(directAttach({ hosts: 3 }))).not.toMatch(/fab-a|HR-/);
   });
 });
