@@ -37,7 +37,7 @@ export function SegmentedPicker<T extends string>({ label, options, value, onCha
               style={({ pressed }) => [styles.option, selected && styles.selected, pressed && !selected && styles.pressed]}
             >
               {selected ? <Icon name="success" size={16} color="onPrimary" /> : null}
-              <Text variant="smallStrong" color={selected ? 'onPrimary' : 'primary'}>
+              <Text variant="smallStrong" color={selected ? 'onPrimary' : 'primary'} style={styles.label}>
                 {option.label}
               </Text>
             </Pressable>
@@ -62,6 +62,8 @@ const styles = StyleSheet.create({
   option: {
     minHeight: TAP_TARGET,
     paddingHorizontal: space.md,
+    // A long label wraps onto two lines without touching the border.
+    paddingVertical: space.xs,
     borderRadius: radius.md,
     borderWidth: 1,
     borderColor: colors.lineStrong,
@@ -75,6 +77,7 @@ const styles = StyleSheet.create({
     flexBasis: 120,
     maxWidth: 200,
   },
+  label: { textAlign: 'center', flexShrink: 1 },
   selected: { backgroundColor: colors.primary, borderColor: colors.primary },
   pressed: { backgroundColor: colors.surfaceSunken },
   error: { flexDirection: 'row', gap: space.xs, alignItems: 'flex-start' },
