@@ -15,7 +15,7 @@ export type InvitationEmailInput = {
 export function invitationEmail(input: InvitationEmailInput): OutgoingMail {
   const role = ROLE_LABELS[input.role];
   const who = input.inviterName ? `${input.inviterName} has invited you` : 'You have been invited';
-  const expiry = input.expiresAt.toUTCString();
+  const expiry = expiryText(input.expiresAt);
   const subject = `Join ${input.teamName} on Cablewright`;
   const text = [
     `${who} to join the team "${input.teamName}" on Cablewright as ${article(role)} ${role}.`,
@@ -38,6 +38,11 @@ export function invitationEmail(input: InvitationEmailInput): OutgoingMail {
     '</div>',
   ].join('\n');
   return { teamId: input.teamId, to: input.to, subject, text, html };
+}
+
+/** As the app writes dates (month name, day, year), with the time in UTC since the reader's zone is unknown. */
+export function expiryText(date: Date): string {
+  return `${new Intl.DateTimeFormat('en-US', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }).format(date)} UTC`;
 }
 
 function article(word: string): string {

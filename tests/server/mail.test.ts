@@ -50,7 +50,8 @@ describe('the invitation e-mail', () => {
     expect(mail.text).toContain('Maya Okafor has invited you');
     expect(mail.text).toContain('as an Installer');
     expect(mail.text).toContain('http://localhost:8090/invitations/TOKEN');
-    expect(mail.text).toContain(expiresAt.toUTCString());
+    // 2031-04-08T09:30:00Z read as a US-English long date and a 12-hour time in UTC.
+    expect(mail.text).toMatch(/until April 8, 2031(,| at) 9:30\sAM UTC\./);
   });
 
   it('escapes what it puts into the HTML twin', () => {
