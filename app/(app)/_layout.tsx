@@ -3,6 +3,7 @@ import { RouteFrame } from '@/components/shell/RouteFrame';
 import { SessionProblem } from '@/components/shell/SessionStates';
 import { SignedInShell } from '@/components/shell/SignedInShell';
 import { useMe } from '@/lib/api/auth';
+import { SessionPendingContext } from '@/lib/api/session-gate';
 
 /** Signed-in screens: signed-out visitors go to sign-in and come back here afterwards. */
 export default function AppLayout() {
@@ -18,7 +19,9 @@ export default function AppLayout() {
   }
   return (
     <RouteFrame loading hidden redirect={me.data === null ? { pathname: '/sign-in', params: { next: pathname } } : null}>
-      <Slot />
+      <SessionPendingContext.Provider value>
+        <Slot />
+      </SessionPendingContext.Provider>
     </RouteFrame>
   );
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CreateDesignBody, CreateDesignResponse, DesignResponse, DesignsResponse } from '@/shared/api/designs';
+import { useSessionPending } from '@/lib/api/session-gate';
 import { api } from '@/lib/api/client';
 
 /**
@@ -26,6 +27,7 @@ export const VERSION_STALE_MS = Infinity;
 
 export function useDesigns(q = '') {
   const query = q.trim();
+  const pending = useSessionPending();
   return useQuery({
     queryKey: designKeys.list(query),
     queryFn: () => api.get<DesignsResponse>(query ? `/api/designs?q=${encodeURIComponent(query)}` : '/api/designs'),
@@ -33,14 +35,17 @@ export function useDesigns(q = '') {
     staleTime: DESIGNS_STALE_MS,
     // Keep the previous rows on screen while a new search term is being answered.
     placeholderData: (previous) => previous,
+    enabled: !pending,
   });
 }
 
 export function useDesign(id: number) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: designKeys.design(id),
     queryFn: () => api.get<DesignResponse>(`/api/designs/${id}`),
     staleTime: DESIGNS_STALE_MS,
+    enabled: !pending,
   });
 }
 

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { useSessionPending } from '@/lib/api/session-gate';
 import type { MailMessage } from '@/shared/api/team';
 import { api } from '@/lib/api/client';
 
@@ -12,12 +13,13 @@ export const MAIL_STALE_MS = 0;
 export const MAIL_REFETCH_MS = 5_000;
 
 export function useDevMail(options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: mailKeys.list(),
     queryFn: () => api.get<{ messages: MailMessage[] }>('/api/dev/mail'),
     select: (data) => data.messages,
     staleTime: MAIL_STALE_MS,
     refetchInterval: MAIL_REFETCH_MS,
-    enabled: options.enabled ?? true,
+    enabled: !pending && (options.enabled ?? true),
   });
 }

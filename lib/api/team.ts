@@ -4,6 +4,7 @@ import type { AcceptInvitationBody, InvitationBody, InvitationPreview, MemberPat
 import { api } from '@/lib/api/client';
 import { authKeys } from '@/lib/api/auth';
 import { mailKeys } from '@/lib/api/mail';
+import { useSessionPending } from '@/lib/api/session-gate';
 
 export const teamKeys = {
   all: ['team'] as const,
@@ -19,11 +20,12 @@ export const TEAM_STALE_MS = 60_000;
  * an invitation since), while the shell's copy for the team's name stays calm.
  */
 export function useTeam(options: { enabled?: boolean; fresh?: boolean } = {}) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: teamKeys.current(),
     queryFn: () => api.get<TeamResponse>('/api/team'),
     staleTime: TEAM_STALE_MS,
-    enabled: options.enabled ?? true,
+    enabled: !pending && (options.enabled ?? true),
     refetchOnMount: options.fresh ? 'always' : true,
   });
 }

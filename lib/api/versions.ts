@@ -2,34 +2,39 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { DiffResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
 import { api, isApiRequestError } from '@/lib/api/client';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
+import { useSessionPending } from '@/lib/api/session-gate';
 
 /** Versions are immutable, so their queries never go stale; saving one refreshes its design. */
 export function useVersion(id: number, n: number, options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: designKeys.version(id, n),
     queryFn: () => api.get<VersionResponse>(`/api/designs/${id}/versions/${n}`),
     select: (data) => data.version,
     staleTime: VERSION_STALE_MS,
-    enabled: options.enabled ?? true,
+    enabled: !pending && (options.enabled ?? true),
   });
 }
 
 export function useVersionReport(id: number, n: number) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: designKeys.report(id, n),
     queryFn: () => api.get<ReportResponse>(`/api/designs/${id}/versions/${n}/report`),
     staleTime: VERSION_STALE_MS,
+    enabled: !pending,
   });
 }
 
 /** What changed going from version `from` to version `to` (the route reads `/versions/:to/diff?against=from`). */
 export function useVersionDiff(id: number, from: number, to: number, options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
   return useQuery({
     queryKey: designKeys.diff(id, from, to),
     queryFn: () => api.get<DiffResponse>(`/api/designs/${id}/versions/${to}/diff?against=${from}`),
     select: (data) => data.diff,
     staleTime: VERSION_STALE_MS,
-    enabled: options.enabled ?? true,
+    enabled: !pending && (options.enabled ?? true),
   });
 }
 

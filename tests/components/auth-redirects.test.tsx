@@ -5,6 +5,8 @@ import { Slot } from 'expo-router';
 import AppLayout from '@/app/(app)/_layout';
 import AuthLayout from '@/app/(auth)/_layout';
 import { api, ApiRequestError } from '@/lib/api/client';
+import { useDesigns } from '@/lib/api/designs';
+import { useTeam } from '@/lib/api/team';
 import { createTestQueryClient, demoUsers } from './helpers/render';
 
 jest.mock('@/lib/api/client', () => require('./helpers/mock-client').clientModule());
@@ -22,9 +24,17 @@ function routes() {
     '(app)/_layout': AppLayout,
     '(app)/designs/index': () => <Text>designs screen</Text>,
     '(app)/team': () => <Text>team screen</Text>,
+    '(app)/fetching': FetchingScreen,
     '(auth)/_layout': AuthLayout,
     '(auth)/sign-in': () => <Text>sign-in screen</Text>,
   };
+}
+
+/** A stand-in screen that reads team data, as the real Designs and Team screens do. */
+function FetchingScreen() {
+  const designs = useDesigns();
+  const team = useTeam();
+  return <Text>{`fetching screen: ${designs.data?.length ?? '-'} designs, ${team.data?.members.length ?? '-'} members`}</Text>;
 }
 
 function answerMe(user: typeof demoUsers.admin | null) {
@@ -35,7 +45,9 @@ function answerMe(user: typeof demoUsers.admin | null) {
       if (!user) throw new ApiRequestError(401, { error: 'Sign in to continue.' });
       return { user };
     }
+    if (!user) throw new ApiRequestError(401, { error: 'Sign in to continue.' });
     if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [] };
+    if (path === '/api/designs') return { designs: [] };
     throw new Error(`unexpected request ${path}`);
   });
 }
@@ -63,5 +75,19 @@ describe('auth redirects in the layouts', () => {
     const router = renderRouter(routes(), { initialUrl: '/sign-in' });
     expect(await screen.findByText('sign-in screen')).toBeOnTheScreen();
     expect(router.getPathname()).toBe('/sign-in');
+  });
+
+  it('sends no team requests while a signed-out visitor is on the way to sign-in', async () => {
+    answerMe(null);
+    const router = renderRouter(routes(), { initialUrl: '/fetching' });
+    expect(await screen.findByText('sign-in screen')).toBeOnTheScreen();
+    expect(router.getSearchParams()).toEqual({ next: '/fetching' });
+    expect(get.mock.calls.map(([path]) => path)).toEqual(['/api/auth/me']);
+  });
+
+  it("loads the screen's data once the session is known", async () => {
+    answerMe(demoUsers.admin);
+    renderRouter(routes(), { initialUrl: '/fetching' });
+    expect(await screen.findByText('fetching screen: 0 designs, 0 members')).toBeOnTheScreen();
   });
 });
