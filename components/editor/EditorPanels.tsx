@@ -80,7 +80,8 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
     return <CablingStrip from={subjectLabel(doc, pending)} onDetails={() => setDetailsFor(pending)} onStop={close} />;
   }
   return (
-    <BottomSheet title={inspectorTitle(doc, selection)} expanded={expanded} onToggle={toggle} onClose={close} testID="sheet-inspector">
+    // Keyed by the selection so a new selection's form starts scrolled to its top.
+    <BottomSheet key={selection.join(' ')} title={inspectorTitle(doc, selection)} expanded={expanded} onToggle={toggle} onClose={close} testID="sheet-inspector">
       <Inspector showTitle={false} />
     </BottomSheet>
   );

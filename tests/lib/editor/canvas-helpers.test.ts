@@ -6,6 +6,7 @@ import { focusOn } from '@/lib/editor/focus';
 import { buildSnapshot, overlappingDevices, rectsIntersect } from '@/lib/editor/geometry';
 import { computeMarks, EMPTY_MARKS } from '@/lib/editor/marks';
 import { placeInView } from '@/lib/editor/placement';
+import { segmentMeetsRect } from '@/lib/editor/hit-test';
 import { actionFor } from '@/lib/editor/shortcuts';
 import { withTidyLayout } from '@/lib/editor/tidy';
 import { revealAbove } from '@/lib/editor/reveal';
@@ -27,6 +28,37 @@ describe('placing a palette device', () => {
     const crowded = placeInView(doc, snapshot, { template: 'host' }, { x: 0, y: 0, width: 900, height: 700 })!;
     const next = runCommand(doc, 'addDevice', { template: 'host', position: crowded });
     expect(overlappingDevices(buildSnapshot(next))).toEqual([]);
+  });
+
+  it('keeps a new device off the cables in view, so it does not look cabled to them', () => {
+    // The demo with its hosts raised 1200 px: a wide gap that only cables cross, and the view on it.
+    const tidy = withTidyLayout(harborRoadV2()).doc;
+    const hosts = new Set(tidy.devices.filter((d) => d.kind === 'host').map((d) => d.id));
+    const layout = Object.fromEntries(Object.entries(tidy.layout!).map(([id, p]) => [id, hosts.has(id) ? { x: p.x, y: p.y - 1200 } : p]));
+    const doc = { ...tidy, layout };
+    const snapshot = buildSnapshot(doc);
+    const rects = [...snapshot.devices.values()];
+    const hostsBottom = Math.max(...rects.filter((b) => hosts.has(b.id)).map((b) => b.rect.y + b.rect.height));
+    const othersTop = Math.min(...rects.filter((b) => !hosts.has(b.id)).map((b) => b.rect.y));
+    const view = { x: 0, y: hostsBottom, width: 1400, height: othersTop - hostsBottom };
+    const position = placeInView(doc, snapshot, { template: 'host' }, view)!;
+    const next = buildSnapshot(runCommand(doc, 'addDevice', { template: 'host', position }));
+    const added = [...next.devices.values()].find((b) => !snapshot.devices.has(b.id))!;
+    expect(overlappingDevices(next)).toEqual([]);
+    expect([...next.cables.values()].filter((line) => segmentMeetsRect(line.a, line.b, added.rect)).map((l) => l.id)).toEqual([]);
+  });
+});
+
+describe('a segment against a rectangle', () => {
+  const rect = { x: 0, y: 0, width: 10, height: 10 };
+  it('meets it when crossing, ending inside or lying inside, and not when passing by', () => {
+    expect(segmentMeetsRect({ x: -5, y: 5 }, { x: 15, y: 5 }, rect)).toBe(true);
+    expect(segmentMeetsRect({ x: -5, y: -5 }, { x: 5, y: 5 }, rect)).toBe(true);
+    expect(segmentMeetsRect({ x: 2, y: 2 }, { x: 3, y: 3 }, rect)).toBe(true);
+    expect(segmentMeetsRect({ x: -5, y: 12 }, { x: 15, y: 12 }, rect)).toBe(false);
+    // Diagonal passing beyond the corner (10, 10): the line x + y = 22 stays outside.
+    expect(segmentMeetsRect({ x: 22, y: 0 }, { x: 0, y: 22 }, rect)).toBe(false);
+    expect(segmentMeetsRect({ x: 20, y: 0 }, { x: 0, y: 20 }, rect)).toBe(true);
   });
 });
 
