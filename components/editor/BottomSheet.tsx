@@ -20,7 +20,7 @@ type BottomSheetProps = {
 export function BottomSheet({ title, expanded, onToggle, onClose, children, testID }: BottomSheetProps) {
   const insets = useSafeAreaInsets();
   return (
-    <View style={[styles.sheet, expanded ? styles.expanded : styles.low, { paddingBottom: insets.bottom }]} testID={testID} role="region" aria-label={title}>
+    <View style={[sheetSurface, expanded ? styles.expanded : styles.low, { paddingBottom: insets.bottom }]} testID={testID} role="region" aria-label={title}>
       <Pressable onPress={onToggle} style={styles.handleRow} role="button" aria-label={expanded ? 'Lower the sheet' : 'Raise the sheet'} aria-expanded={expanded} testID={testID ? `${testID}-handle` : undefined}>
         <View style={styles.handle} />
       </Pressable>
@@ -37,8 +37,9 @@ export function BottomSheet({ title, expanded, onToggle, onClose, children, test
   );
 }
 
-const styles = StyleSheet.create({
-  sheet: {
+/** The surface every phone sheet sits on: pinned to the bottom over the canvas, rounded at the top. */
+export const sheetSurface = StyleSheet.create({
+  base: {
     position: 'absolute',
     left: 0,
     right: 0,
@@ -50,6 +51,9 @@ const styles = StyleSheet.create({
     borderColor: colors.lineStrong,
     zIndex: 10,
   },
+}).base;
+
+const styles = StyleSheet.create({
   low: { height: '42%' },
   expanded: { height: '82%' },
   handleRow: { alignItems: 'center', paddingTop: space.sm, paddingBottom: space.xs, minHeight: 24 },

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
-import { Button, Text, colors, radius, space } from '@/components/ui';
+import { Button, Text, space } from '@/components/ui';
+import { sheetSurface } from '@/components/editor/BottomSheet';
 
 type CablingStripProps = { from: string; onDetails: () => void; onStop: () => void };
 
@@ -11,7 +12,7 @@ type CablingStripProps = { from: string; onDetails: () => void; onStop: () => vo
 export function CablingStrip({ from, onDetails, onStop }: CablingStripProps) {
   const insets = useSafeAreaInsets();
   return (
-    <View style={[styles.strip, { paddingBottom: insets.bottom + space.sm }]} role="region" aria-label="Cabling" testID="cabling-strip">
+    <View style={[sheetSurface, styles.strip, { paddingBottom: insets.bottom + space.sm }]} role="region" aria-label="Cabling" testID="cabling-strip">
       <Text variant="small" testID="cabling-strip-text">
         {`Cabling from ${from}: tap the port at the other end.`}
       </Text>
@@ -24,20 +25,6 @@ export function CablingStrip({ from, onDetails, onStop }: CablingStripProps) {
 }
 
 const styles = StyleSheet.create({
-  strip: {
-    position: 'absolute',
-    left: 0,
-    right: 0,
-    bottom: 0,
-    gap: space.sm,
-    paddingTop: space.md,
-    paddingHorizontal: space.lg,
-    backgroundColor: colors.surface,
-    borderTopLeftRadius: radius.lg,
-    borderTopRightRadius: radius.lg,
-    borderTopWidth: 1,
-    borderColor: colors.lineStrong,
-    zIndex: 10,
-  },
+  strip: { gap: space.sm, paddingTop: space.md, paddingHorizontal: space.lg },
   actions: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
 });
