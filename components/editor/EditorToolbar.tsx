@@ -5,6 +5,7 @@ import { Text, colors, space } from '@/components/ui';
 import { useBaseVersion, useCanRedo, useCanUndo, useDirty, useEditorDoc, useReadOnly, useSelection } from '@/lib/editor/hooks';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { plural } from '@/lib/designs/summary';
+import { severityCounts } from '@/lib/report/view';
 import type { Finding } from '@/shared/analysis/types';
 import { editorStore } from '@/lib/editor/store';
 import { IconButton } from '@/components/editor/IconButton';
@@ -27,8 +28,7 @@ type ToolbarProps = {
 
 /** The same words as the findings list: problems are errors; warnings only when there are some. */
 function findingCounts(findings: readonly Finding[]): string {
-  const error = findings.filter((f) => f.severity === 'error').length;
-  const warning = findings.filter((f) => f.severity === 'warning').length;
+  const { error, warning } = severityCounts(findings);
   return `${plural(error, 'problem')}${warning > 0 ? `, ${plural(warning, 'warning')}` : ''}`;
 }
 

@@ -10,6 +10,7 @@ import { buildSnapshot } from '@/lib/editor/geometry';
 import { useEditorDoc } from '@/lib/editor/hooks';
 import { liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
+import { severityCounts } from '@/lib/report/view';
 import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { FindingLine } from '@/components/inspector/FindingsAbout';
 
@@ -38,11 +39,7 @@ export function FindingsPanel({ onFocused }: { onFocused?: () => void }) {
       return n;
     });
   }, [findings]);
-  const counts = useMemo(() => {
-    const c = { error: 0, warning: 0, info: 0 };
-    for (const f of report?.findings ?? []) c[f.severity] += 1;
-    return c;
-  }, [report]);
+  const counts = useMemo(() => severityCounts(report?.findings ?? []), [report]);
 
   const focus = (finding: Finding) => {
     const state = editorStore.getState();

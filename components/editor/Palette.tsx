@@ -51,8 +51,10 @@ function PaletteItem({ template, open, onToggle, onAdded }: { template: Template
   );
 }
 
-/** The palette: each template with its counts, and pattern starters. */
-/** `showTitle`: false inside the phone's sheet, whose own header already says it. */
+/**
+ * The palette: each template with its counts, and pattern starters. `showTitle` is false inside the
+ * phone's sheet, whose own header already says it.
+ */
 export function Palette({ onAdded, showTitle = true }: { onAdded?: () => void; showTitle?: boolean }) {
   const [open, setOpen] = useState<string | null>(null);
   return (

@@ -1,5 +1,6 @@
 import type { Finding, HostArrayResult, Report, Severity } from '@/shared/analysis/types';
 import { compareAccess, type PairImpact } from '@/lib/report/whatif';
+import { storageHosts } from '@/shared/analysis/summary';
 import type { Topology } from '@/shared/topology/schema';
 
 /**
@@ -28,8 +29,7 @@ export function hostRows(baseline: Report, simulated: Report | null): HostRow[] 
  */
 export function hostsWithoutAccess(doc: Topology, report: Report): string[] {
   const reached = new Set(report.hosts.map((pair) => pair.host));
-  return doc.devices
-    .filter((d) => d.kind === 'host' && d.adapters.some((a) => a.ports.some((p) => p.role === 'data')))
+  return storageHosts(doc)
     .map((d) => d.id)
     .filter((id) => !reached.has(id))
     .sort();
@@ -38,6 +38,13 @@ export function hostsWithoutAccess(doc: Topology, report: Report): string[] {
 export const SEVERITY_ORDER: readonly Severity[] = ['error', 'warning', 'info'];
 
 export const SEVERITY_TITLES: Record<Severity, string> = { error: 'Errors', warning: 'Warnings', info: 'Notes' };
+
+/** How many findings there are of each severity. */
+export function severityCounts(findings: readonly Finding[]): Record<Severity, number> {
+  const counts = { error: 0, warning: 0, info: 0 };
+  for (const f of findings) counts[f.severity] += 1;
+  return counts;
+}
 
 export function findingsBySeverity(findings: readonly Finding[]): { severity: Severity; findings: Finding[] }[] {
   return SEVERITY_ORDER.map((severity) => ({ severity, findings: findings.filter((f) => f.severity === severity) }));

@@ -1,5 +1,5 @@
 import type { Report } from '@/shared/analysis/types';
-import type { Topology } from '@/shared/topology/schema';
+import type { HostDevice, Topology } from '@/shared/topology/schema';
 
 /**
  * The few numbers the server stores with each version and the design list shows.
@@ -20,17 +20,20 @@ export type ReportSummary = {
   redundantHosts: number;
 };
 
+/** Hosts with at least one data port: the storage clients the summary and the report count. */
+export function storageHosts(doc: Topology): HostDevice[] {
+  return doc.devices.filter((d): d is HostDevice => d.kind === 'host' && d.adapters.some((a) => a.ports.some((p) => p.role === 'data')));
+}
+
 export function summarize(report: Report, doc: Topology): ReportSummary {
-  const storageHosts = doc.devices.filter(
-    (d) => d.kind === 'host' && d.adapters.some((a) => a.ports.some((p) => p.role === 'data')),
-  );
+  const hosts = storageHosts(doc);
   const pairsOf = new Map<string, boolean>();
   for (const pair of report.hosts) pairsOf.set(pair.host, (pairsOf.get(pair.host) ?? true) && pair.redundant);
   return {
     errors: report.findings.filter((f) => f.severity === 'error').length,
     warnings: report.findings.filter((f) => f.severity === 'warning').length,
     singlePointsOfFailure: new Set(report.failures.map((f) => f.unit)).size,
-    hosts: storageHosts.length,
-    redundantHosts: storageHosts.filter((h) => pairsOf.get(h.id) === true).length,
+    hosts: hosts.length,
+    redundantHosts: hosts.filter((h) => pairsOf.get(h.id) === true).length,
   };
 }
