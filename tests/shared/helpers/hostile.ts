@@ -30,7 +30,7 @@ export function collidingIds(): string[] {
 /** Every hostile id, without repeats: prototype names first. */
 export function hostilePool(): string[] {
   const decorated: string[] = [];
-  for (const name of PROTOTYPE_NAMES) for (const sep of ['\u0000', '\u0001', '\u202e']) decorated.push(`${name}${sep}`, `${sep}${name}`);
+  for (const name of PROTOTYPE_NAMES) for (const sep of ['\u202e', ...SEPARATORS]) decorated.push(`${name}${sep}`, `${sep}${name}`);
   return [...new Set([...PROTOTYPE_NAMES, ...CONTROL_IDS, ...BIDI_IDS, ...collidingIds(), ...decorated])];
 }
 
