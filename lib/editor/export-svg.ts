@@ -1,5 +1,6 @@
 import type { Media } from '@/shared/topology/schema';
 import { MEDIA } from '@/shared/topology/schema';
+import { splitIds } from '@/shared/keys/tuple';
 import {
   cableStyle,
   FONT_FAMILY,
@@ -102,7 +103,7 @@ function deviceSvg(box: DeviceBox, cabled: ReadonlySet<string>, fabrics: Fabrics
     out.push(text(x + 16, 23, m.badge.text, { 'font-size': L.smallSize, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 600 }));
     out.push(text(x + 8, 23, m.badge.redundant ? '✓' : '!', { 'text-anchor': 'middle', 'font-size': L.smallSize, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 700 }));
   }
-  const spofGroups = new Set(m.spofGroups ? m.spofGroups.split('\n') : []);
+  const spofGroups = new Set(splitIds(m.spofGroups));
   for (const group of shape.groups) {
     const r = group.rect;
     out.push(`<rect ${attrs({ x: r.x, y: r.y, width: r.width, height: r.height, rx: 4, fill: INK.paper, stroke: INK.line })}/>`);
