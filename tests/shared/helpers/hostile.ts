@@ -81,8 +81,8 @@ export function withIdOfKind(doc: Topology, kind: IdKind, id: string, index = 0)
   return renameIds(doc, (old) => (old === target.id ? id : old));
 }
 
-/** The document with every id replaced by a hostile one, in a seeded order. */
-export function allHostile(doc: Topology, seed: number): Topology {
+/** A hostile id for each of the ids, different ones for different ids, in a seeded order. */
+export function hostileMap(ids: readonly string[], seed: number): Map<string, string> {
   const pool = hostilePool();
   const rnd = mulberry32(seed);
   // Prototype names first, the rest shuffled, then the whole order rotated: every seed gives the
@@ -92,12 +92,16 @@ export function allHostile(doc: Topology, seed: number): Topology {
     const j = Math.floor(rnd() * (i + 1));
     [rest[i], rest[j]] = [rest[j], rest[i]];
   }
-  const ids = idsOf(doc).map((x) => x.id);
   if (ids.length > pool.length) throw new Error(`the pool has ${pool.length} ids, the document ${ids.length}`);
   const shift = seed % ids.length;
   const order = [...ids.slice(shift), ...ids.slice(0, shift)];
   const names = [...PROTOTYPE_NAMES, ...rest];
-  const map = new Map(order.map((id, i) => [id, names[i]]));
+  return new Map(order.map((id, i) => [id, names[i]]));
+}
+
+/** The document with every id replaced by a hostile one, in a seeded order. */
+export function allHostile(doc: Topology, seed: number): Topology {
+  const map = hostileMap(idsOf(doc).map((x) => x.id), seed);
   return renameIds(doc, (id) => map.get(id) ?? id);
 }
 
