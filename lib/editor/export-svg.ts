@@ -38,8 +38,16 @@ export type ExportSvgOptions = { marks?: CanvasMarks; fabrics?: Fabrics; padding
 
 const LEGEND_ROW = 22;
 
+/**
+ * Characters XML 1.0 does not allow at all, not even escaped (W3C XML 1.0 §2.2, the Char
+ * production): C0 controls other than tab, line feed and carriage return, lone surrogates, U+FFFE
+ * and U+FFFF. Ids may hold them (names are cleaned when a document is read, ids are not), and one
+ * such character would make the whole file unreadable, so they are dropped from the text.
+ */
+const NOT_XML = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g;
+
 export function escapeXml(text: string): string {
-  return text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
+  return text.replace(NOT_XML, '').replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
 }
 
 function attrs(values: Record<string, string | number | null | undefined>): string {
