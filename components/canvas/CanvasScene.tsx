@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { useStore } from 'zustand';
+import { joinIds } from '@/shared/keys/tuple';
 import Svg, { Circle, Defs, G, Line, Pattern, Rect } from 'react-native-svg';
 import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { GRID_SIZE, visibleWorld } from '@/lib/editor/viewport';
@@ -12,7 +13,7 @@ import { cull, cullRect, DETAIL_ZOOM } from '@/lib/editor/culling';
 import { CableLayer, DeviceLayer } from '@/components/canvas/Layers';
 import { Marquee, RubberBand } from '@/components/canvas/Overlays';
 
-/** Ports with a cable, per device, "\n"-joined in cable order (compares by value in the layers). */
+/** Ports with a cable, per device, as joinIds text in cable order (compares by value in the layers). */
 function cabledByDevice(snapshot: Snapshot): Map<string, string> {
   const lists = new Map<string, string[]>();
   for (const cable of snapshot.doc.cables) {
@@ -24,7 +25,7 @@ function cabledByDevice(snapshot: Snapshot): Map<string, string> {
       else lists.set(deviceId, [portId]);
     }
   }
-  return new Map([...lists].map(([id, ports]) => [id, ports.join('\n')]));
+  return new Map([...lists].map(([id, ports]) => [id, joinIds(ports)]));
 }
 
 function partsByDevice(snapshot: Snapshot, selection: string[]): Map<string, string> {
@@ -33,7 +34,7 @@ function partsByDevice(snapshot: Snapshot, selection: string[]): Map<string, str
     const deviceId = snapshot.parts.get(id)?.deviceId;
     if (deviceId) lists.set(deviceId, [...(lists.get(deviceId) ?? []), id]);
   }
-  return new Map([...lists].map(([id, parts]) => [id, parts.join('\n')]));
+  return new Map([...lists].map(([id, parts]) => [id, joinIds(parts)]));
 }
 
 /**

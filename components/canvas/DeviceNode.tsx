@@ -1,5 +1,6 @@
 import { memo, useMemo } from 'react';
 import { G, Path, Rect, Text } from 'react-native-svg';
+import { splitIds } from '@/shared/keys/tuple';
 import { HEADER_LAYOUT as L, INK, KIND_STYLE, plinthPath, silhouettePath } from '@/lib/editor/drawing';
 import type { FabricTag } from '@/lib/editor/fabrics';
 import type { DeviceMarks } from '@/lib/editor/marks';
@@ -14,7 +15,7 @@ import { SpofOutline } from '@/components/canvas/SpofMark';
  * One device on the canvas. The outer group carries only the position; everything inside is the
  * device's shape in its own coordinates, memoised on the shape (cached per device object), so a
  * drag that moves the device re-renders one transform and nothing inside it. Sets of ids arrive
- * as "\n"-joined strings so memo compares them by value.
+ * as joinIds strings (shared/keys/tuple.ts) so memo compares them by value.
  */
 export type DeviceNodeProps = {
   box: DeviceBox;
@@ -29,7 +30,7 @@ export type DeviceNodeProps = {
   fabric: FabricTag | null;
 };
 
-const split = (joined: string) => new Set(joined ? joined.split('\n') : []);
+const split = (joined: string) => new Set(splitIds(joined));
 
 type BodyProps = Omit<DeviceNodeProps, 'box' | 'selected'> & { id: string; kind: DeviceBox['kind']; name: string; switchRole: DeviceBox['switchRole']; shape: DeviceShape };
 

@@ -1,4 +1,5 @@
 import { Platform } from 'react-native';
+import { emptyRecord } from '@/shared/keys/record';
 import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { exportSvg } from '@/lib/editor/export-svg';
 import { buildSnapshot, fitToBounds, GRID_SIZE, zoomAbout } from '@/lib/editor/geometry';
@@ -25,7 +26,7 @@ export function nudge(dx: number, dy: number): void {
   const state = editorStore.getState();
   if (state.readOnly) return;
   const snapshot = buildSnapshot(state.doc);
-  const positions: Record<string, { x: number; y: number }> = {};
+  const positions = emptyRecord<{ x: number; y: number }>();
   for (const id of state.selection) {
     const box = snapshot.devices.get(id);
     if (box) positions[id] = { x: box.position.x + dx * GRID_SIZE, y: box.position.y + dy * GRID_SIZE };

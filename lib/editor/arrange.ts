@@ -1,4 +1,6 @@
 import { graphlib, layout } from '@dagrejs/dagre';
+import { emptyRecord, type IdRecord } from '@/shared/keys/record';
+import { tupleKey } from '@/shared/keys/tuple';
 import type { Device, Position, Topology } from '@/shared/topology/schema';
 import { deviceShape } from '@/lib/editor/shape';
 import { GRID_SIZE } from '@/lib/editor/viewport';
@@ -12,6 +14,10 @@ import { GRID_SIZE } from '@/lib/editor/viewport';
  * links are left out of the ordering (they join the management switch to everything and would
  * only pull it into the middle); management switches
  * go at the right end of the switch band, beside the fabrics they are kept apart from.
+ *
+ * dagre's graph keeps nodes in plain objects, so it is given names of our own (`n` and the
+ * device's place in the document), never the device ids: an id such as `constructor` would
+ * otherwise be a node before it is added.
  */
 export type ArrangeOptions = { origin?: Position; bandGap?: number; deviceGap?: number; maxRowWidth?: number };
 
@@ -43,7 +49,7 @@ function dataLinks(doc: Topology): Map<string, { from: Device; to: Device; count
     if (isManagementSwitch(a.device) || isManagementSwitch(b.device)) continue;
     const [from, to] = BAND_OF[a.device.kind] <= BAND_OF[b.device.kind] ? [a.device, b.device] : [b.device, a.device];
     if (BAND_OF[from.kind] === BAND_OF[to.kind]) continue;
-    const key = `${from.id}\u0000${to.id}`;
+    const key = tupleKey([from.id, to.id]);
     const link = links.get(key);
     if (link) link.count += 1;
     else links.set(key, { from, to, count: 1 });
@@ -56,16 +62,18 @@ function dagreOrder(doc: Topology): Map<string, number> {
   const graph = new graphlib.Graph({ multigraph: false });
   graph.setGraph({ rankdir: 'TB', nodesep: 40, ranksep: 120 });
   graph.setDefaultEdgeLabel(() => ({}));
-  for (const device of doc.devices) {
+  const names = new Map<string, string>();
+  doc.devices.forEach((device, i) => {
     const shape = deviceShape(device);
-    graph.setNode(device.id, { width: shape.width, height: shape.height });
-  }
+    names.set(device.id, `n${i}`);
+    graph.setNode(`n${i}`, { width: shape.width, height: shape.height });
+  });
   for (const { from, to, count } of dataLinks(doc).values()) {
-    graph.setEdge(from.id, to.id, { minlen: BAND_OF[to.kind] - BAND_OF[from.kind], weight: count });
+    graph.setEdge(names.get(from.id)!, names.get(to.id)!, { minlen: BAND_OF[to.kind] - BAND_OF[from.kind], weight: count });
   }
   layout(graph);
   const xs = new Map<string, number>();
-  for (const device of doc.devices) xs.set(device.id, graph.node(device.id)?.x ?? 0);
+  for (const device of doc.devices) xs.set(device.id, graph.node(names.get(device.id)!)?.x ?? 0);
   return xs;
 }
 
@@ -82,16 +90,16 @@ function bands(doc: Topology, xs: Map<string, number>): Device[][] {
 const snapUp = (value: number) => Math.ceil(value / GRID_SIZE) * GRID_SIZE;
 
 /** New canvas positions for every device of the document (grid-aligned, no overlaps). */
-export function computeArrangement(doc: Topology, options: ArrangeOptions = {}): Record<string, Position> {
+export function computeArrangement(doc: Topology, options: ArrangeOptions = {}): IdRecord<Position> {
   const origin = options.origin ?? { x: 0, y: 0 };
   const bandGap = options.bandGap ?? 160;
   const deviceGap = options.deviceGap ?? 40;
   const maxRowWidth = options.maxRowWidth ?? MAX_ROW_WIDTH;
-  if (doc.devices.length === 0) return {};
+  if (doc.devices.length === 0) return emptyRecord();
   const widthOf = (row: Device[]) => row.reduce((sum, d) => sum + deviceShape(d).width, 0) + deviceGap * (row.length - 1);
   const bandRows = bands(doc, dagreOrder(doc)).map((band) => wrap(band, maxRowWidth, deviceGap));
   const widest = Math.max(...bandRows.flat().map(widthOf));
-  const positions: Record<string, Position> = {};
+  const positions = emptyRecord<Position>();
   let y = snapUp(origin.y);
   for (const rows of bandRows) {
     rows.forEach((row, index) => {

@@ -1,5 +1,6 @@
 import type { Media } from '@/shared/topology/schema';
 import { MEDIA } from '@/shared/topology/schema';
+import { splitIds } from '@/shared/keys/tuple';
 import {
   cableStyle,
   FONT_FAMILY,
@@ -37,8 +38,16 @@ export type ExportSvgOptions = { marks?: CanvasMarks; fabrics?: Fabrics; padding
 
 const LEGEND_ROW = 22;
 
+/**
+ * Characters XML 1.0 does not allow at all, not even escaped (W3C XML 1.0 §2.2, the Char
+ * production): C0 controls other than tab, line feed and carriage return, lone surrogates, U+FFFE
+ * and U+FFFF. Ids may hold them (names are cleaned when a document is read, ids are not), and one
+ * such character would make the whole file unreadable, so they are dropped from the text.
+ */
+const NOT_XML = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g;
+
 export function escapeXml(text: string): string {
-  return text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
+  return text.replace(NOT_XML, '').replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
 }
 
 function attrs(values: Record<string, string | number | null | undefined>): string {
@@ -102,7 +111,7 @@ function deviceSvg(box: DeviceBox, cabled: ReadonlySet<string>, fabrics: Fabrics
     out.push(text(x + 16, 23, m.badge.text, { 'font-size': L.smallSize, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 600 }));
     out.push(text(x + 8, 23, m.badge.redundant ? '✓' : '!', { 'text-anchor': 'middle', 'font-size': L.smallSize, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 700 }));
   }
-  const spofGroups = new Set(m.spofGroups ? m.spofGroups.split('\n') : []);
+  const spofGroups = new Set(splitIds(m.spofGroups));
   for (const group of shape.groups) {
     const r = group.rect;
     out.push(`<rect ${attrs({ x: r.x, y: r.y, width: r.width, height: r.height, rx: 4, fill: INK.paper, stroke: INK.line })}/>`);

@@ -1,3 +1,4 @@
+import { tupleKey } from '@/shared/keys/tuple';
 import type { Network, Topology } from '@/shared/topology/schema';
 import { iteratePorts } from '@/shared/topology/index';
 import { FABRIC_INKS } from '@/lib/editor/drawing';
@@ -14,7 +15,7 @@ export type FabricTag = { tag: string; ink: string; name: string };
 
 const interned = new Map<string, FabricTag>();
 function intern(tag: string, ink: string, name: string): FabricTag {
-  const key = `${tag}\u0000${ink}\u0000${name}`;
+  const key = tupleKey([tag, ink, name]);
   let found = interned.get(key);
   if (!found) {
     found = { tag, ink, name };

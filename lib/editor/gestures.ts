@@ -1,3 +1,4 @@
+import { emptyRecord, recordFrom } from '@/shared/keys/record';
 import { canvasUiStore, type CanvasUiStore } from '@/lib/editor/canvas-ui';
 import { makeSnapshotSelector } from '@/lib/editor/hooks';
 import { devicesInRect, hitTest, type Hit } from '@/lib/editor/hit-test';
@@ -90,10 +91,10 @@ export function createGestures(options: GestureOptions = {}) {
     const inSelection = state.selection.includes(deviceId);
     if (!inSelection) state.select(additive ? [...state.selection, deviceId] : [deviceId]);
     const ids = inSelection ? state.selection.filter((id) => snap.devices.has(id)) : additive ? [...state.selection.filter((id) => snap.devices.has(id)), deviceId] : [deviceId];
-    const from: Record<string, Point> = {};
-    for (const id of ids) from[id] = snap.devices.get(id)!.position;
+    // Keyed by device id: records without a prototype, so an id such as __proto__ is a key too.
+    const from = recordFrom(ids.map((id) => [id, snap.devices.get(id)!.position] as const));
     mode = { kind: 'drag', start, from };
-    ui.setState({ drag: { ids, from, moves: { ...from } } });
+    ui.setState({ drag: { ids, from, moves: recordFrom(Object.entries(from)) } });
     return true;
   }
 
@@ -126,7 +127,7 @@ export function createGestures(options: GestureOptions = {}) {
         const zoom = editor().viewport.zoom;
         const dx = (input.point.x - mode.start.x) / zoom;
         const dy = (input.point.y - mode.start.y) / zoom;
-        const moves: Record<string, Point> = {};
+        const moves = emptyRecord<Point>();
         for (const [id, p] of Object.entries(mode.from)) moves[id] = snapToGrid({ x: p.x + dx, y: p.y + dy });
         const drag = ui.getState().drag;
         if (drag && Object.keys(moves).every((id) => drag.moves[id].x === moves[id].x && drag.moves[id].y === moves[id].y)) return;

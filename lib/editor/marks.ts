@@ -1,4 +1,5 @@
 import type { Finding, Report } from '@/shared/analysis/types';
+import { joinIds } from '@/shared/keys/tuple';
 import type { Topology } from '@/shared/topology/schema';
 
 /**
@@ -22,7 +23,7 @@ export type HostBadge = {
 export type DeviceMarks = {
   /** The device itself (a switch) is a single point of failure for some host. */
   spof: boolean;
-  /** Its controllers or cards that are single points of failure, joined by "\n" (a string so it compares by value). */
+  /** Its controllers or cards that are single points of failure, as joinIds text (a string so it compares by value; splitIds reads it). */
   spofGroups: string;
   badge: HostBadge | null;
 };
@@ -71,7 +72,7 @@ export function computeMarks(doc: Topology, report: Report | null, previous: Can
   const devices = new Map<string, DeviceMarks>();
   for (const device of doc.devices) {
     const groups = device.kind === 'array' ? device.controllers : device.kind === 'host' ? device.adapters : [];
-    const spofGroups = groups.filter((g) => spofUnits.has(g.id)).map((g) => g.id).join('\n');
+    const spofGroups = joinIds(groups.filter((g) => spofUnits.has(g.id)).map((g) => g.id));
     const hasData = device.kind === 'host' && device.adapters.some((a) => a.ports.some((p) => p.role === 'data'));
     const badge = device.kind === 'host' ? badgeFor(device.name, pairsByHost.get(device.id) ?? [], hasData) : null;
     const spof = spofUnits.has(device.id);

@@ -1,4 +1,5 @@
-import type { Device, Position, Topology } from '@/shared/topology/schema';
+import { positionOf } from '@/shared/topology/layout';
+import type { Device, Topology } from '@/shared/topology/schema';
 import { deviceShape, type Point, type Rect } from '@/lib/editor/shape';
 
 /** Where devices are drawn, and the extent of a drawing. */
@@ -11,13 +12,12 @@ const UNPLACED_GAP = 40;
  * (deterministic, so a document without layout still draws without overlaps).
  */
 export function resolvePositions(doc: Topology): Map<string, Point> {
-  const layout: Record<string, Position> = doc.layout ?? {};
   const positions = new Map<string, Point>();
   let bottom = -Infinity;
   let left = Infinity;
   const unplaced: Device[] = [];
   for (const device of doc.devices) {
-    const p = layout[device.id];
+    const p = positionOf(doc, device.id);
     if (!p) {
       unplaced.push(device);
       continue;

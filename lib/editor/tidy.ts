@@ -1,3 +1,4 @@
+import { positionOf } from '@/shared/topology/layout';
 import type { Topology } from '@/shared/topology/schema';
 import { computeArrangement } from '@/lib/editor/arrange';
 import { overlappingDevices } from '@/lib/editor/hit-test';
@@ -10,7 +11,7 @@ import { buildSnapshot } from '@/lib/editor/snapshot';
  */
 export function withTidyLayout(doc: Topology): { doc: Topology; fixed: boolean } {
   if (doc.devices.length === 0) return { doc, fixed: false };
-  const unplaced = doc.devices.some((d) => !doc.layout?.[d.id]);
+  const unplaced = doc.devices.some((d) => !positionOf(doc, d.id));
   if (!unplaced && overlappingDevices(buildSnapshot(doc)).length === 0) return { doc, fixed: false };
   return { doc: { ...doc, layout: computeArrangement(doc) }, fixed: true };
 }

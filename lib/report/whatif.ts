@@ -1,4 +1,5 @@
 import type { HostArrayResult, Report } from '@/shared/analysis/types';
+import { tupleKey } from '@/shared/keys/tuple';
 
 /**
  * What a simulated failure does to each host's access to each array, compared with the report
@@ -14,7 +15,7 @@ export type PairImpact = {
 };
 
 function pairKey(pair: { host: string; array: string }): string {
-  return `${pair.host}\u0000${pair.array}`;
+  return tupleKey([pair.host, pair.array]);
 }
 
 export function compareAccess(baseline: Report, simulated: Report): PairImpact[] {

@@ -7,16 +7,27 @@ import type { Topology } from '@/shared/topology/schema';
 
 /**
  * The analysis of one valid document (run validateTopology first). Pure and deterministic: the
- * report is built from the document alone, every list is sorted by ids in plain code-unit order,
- * so the same document always gives byte-identical JSON, in the browser and on the server.
+ * report is built from the document alone, every list is sorted by ids in plain code-unit order
+ * (findings by their subject lists compared id by id, never joined into one string, which ids
+ * holding the separator would make ambiguous), so the same document always gives byte-identical
+ * JSON, in the browser and on the server.
  */
 const SEVERITY_ORDER: Record<Severity, number> = { error: 0, warning: 1, info: 2 };
+
+/** Lists of ids in order, element by element (a shorter list first when one begins the other). */
+function byIdList(x: readonly string[], y: readonly string[]): number {
+  for (let i = 0; i < x.length && i < y.length; i += 1) {
+    const order = byId(x[i], y[i]);
+    if (order !== 0) return order;
+  }
+  return x.length - y.length;
+}
 
 function compareFindings(x: Finding, y: Finding): number {
   return (
     SEVERITY_ORDER[x.severity] - SEVERITY_ORDER[y.severity] ||
     byId(x.rule, y.rule) ||
-    byId(x.subjects.join('\u0000'), y.subjects.join('\u0000')) ||
+    byIdList(x.subjects, y.subjects) ||
     byId(x.message, y.message)
   );
 }

@@ -1,7 +1,7 @@
 import type { DataPathGraph, NodeKind } from '@/shared/analysis/graph';
 
 /**
- * The graphlib graph copied once into flat typed arrays (compressed sparse rows): node i's
+ * The data-path graph copied once into flat typed arrays (compressed sparse rows): node i's
  * successors are `targets[offsets[i] .. offsets[i+1])`, and `edgeNetwork[e]` is the network code
  * of edge e (-1 for an edge that belongs to every network). The dominator runs, one per
  * (array, network), walk these arrays instead of graphlib's string-keyed maps, which keeps the
@@ -25,7 +25,7 @@ export function compileGraph(graph: DataPathGraph): CompiledGraph {
   const ids = graph.nodes();
   const indexOf = new Map<string, number>();
   ids.forEach((id, i) => indexOf.set(id, i));
-  const kinds = ids.map((id) => graph.node(id).kind);
+  const kinds = ids.map((id) => graph.node(id)!.kind);
   const isUnit = Uint8Array.from(kinds, (kind) => (kind === 'array' || kind === 'host' ? 0 : 1));
   const networkCode = new Map<string, number>();
   const offsets = new Int32Array(ids.length + 1);
@@ -35,7 +35,7 @@ export function compileGraph(graph: DataPathGraph): CompiledGraph {
   for (let i = 0; i < ids.length; i += 1) {
     offsets[i] = e;
     for (const edge of graph.outEdges(ids[i]) ?? []) {
-      const network = graph.edge(edge)?.network;
+      const network = graph.edge(edge.v, edge.w)?.network;
       let code = ANY_NETWORK;
       if (network !== undefined) {
         code = networkCode.get(network) ?? networkCode.size;

@@ -1,9 +1,10 @@
-import { Graph } from '@dagrejs/graphlib';
 import { dataCables, type AnalysisContext } from '@/shared/analysis/context';
+import { IdGraph } from '@/shared/analysis/id-graph';
 
 /**
- * The data-path graph of one document, as a directed graphlib graph whose node names are the
- * document's own ids (unique across the document, so they cannot collide):
+ * The data-path graph of one document, as a directed graphlib graph whose nodes are the
+ * document's own ids (unique across the document), kept out of graphlib's plain-object storage by
+ * IdGraph (id-graph.ts), so an id such as `constructor` is a node like any other:
  *
  *   array ─▶ controller ─▶ cable ─▶ switch ⇄ cable ⇄ switch … ─▶ cable ─▶ card ─▶ host
  *                     └──────────── (direct attach) ─────────────▶ cable ─▶ card ─▶ host
@@ -32,7 +33,7 @@ export type NodeLabel = { kind: NodeKind };
 /** `network` is the networkId of the port the edge passes through, when it is a host or controller port. */
 export type EdgeLabel = { network?: string; port?: string };
 
-export type DataPathGraph = Graph<unknown, NodeLabel, EdgeLabel>;
+export type DataPathGraph = IdGraph<NodeLabel, EdgeLabel>;
 
 function ensureNode(graph: DataPathGraph, id: string, kind: NodeKind): void {
   if (!graph.hasNode(id)) graph.setNode(id, { kind });
@@ -51,7 +52,7 @@ function addArrays(ctx: AnalysisContext, graph: DataPathGraph): void {
 }
 
 export function buildDataPathGraph(ctx: AnalysisContext, options: { withHosts?: boolean } = {}): DataPathGraph {
-  const graph: DataPathGraph = new Graph({ directed: true });
+  const graph: DataPathGraph = new IdGraph();
   addArrays(ctx, graph);
   for (const ends of dataCables(ctx)) {
     const cable = ends.cable;

@@ -1,4 +1,5 @@
 import type { FieldChange } from '@/shared/diff/types';
+import { positionOf } from '@/shared/topology/layout';
 import type { Topology } from '@/shared/topology/schema';
 
 /**
@@ -22,13 +23,11 @@ export function documentChanges(before: Topology, after: Topology): FieldChange[
  */
 export function countLayoutMoved(before: Topology, after: Topology): number {
   const afterIds = new Set(after.devices.map((d) => d.id));
-  const layoutBefore = before.layout ?? {};
-  const layoutAfter = after.layout ?? {};
   let moved = 0;
   for (const device of before.devices) {
     if (!afterIds.has(device.id)) continue;
-    const b = Object.hasOwn(layoutBefore, device.id) ? layoutBefore[device.id] : undefined;
-    const a = Object.hasOwn(layoutAfter, device.id) ? layoutAfter[device.id] : undefined;
+    const b = positionOf(before, device.id);
+    const a = positionOf(after, device.id);
     if (!b && !a) continue;
     if (!b || !a || b.x !== a.x || b.y !== a.y) moved += 1;
   }

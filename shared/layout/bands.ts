@@ -1,4 +1,5 @@
 import { deviceShape } from '@/shared/layout/shape';
+import { emptyRecord, type IdRecord } from '@/shared/keys/record';
 import type { Device, Position } from '@/shared/topology/schema';
 
 /** Space between boxes in a band and between bands, on the canvas's 20 px grid. */
@@ -15,12 +16,12 @@ const snap = (value: number) => Math.round(value / GRID) * GRID;
  * patterns, as the canvas's auto-arrange does). Each box is placed by its drawn size, so none overlap,
  * and every band is centred under the widest one; a band wider than MAX_BAND_WIDTH wraps onto more rows.
  */
-export function layoutBands(bands: Device[][], origin: Position = { x: 40, y: 40 }): Record<string, Position> {
+export function layoutBands(bands: Device[][], origin: Position = { x: 40, y: 40 }): IdRecord<Position> {
   const sized = bands.flatMap((band) => wrap(band.map((device) => ({ device, shape: deviceShape(device) }))));
   const widthOf = (band: typeof sized[number]) =>
     band.reduce((sum, { shape }) => sum + shape.width, 0) + BAND_GAP_X * Math.max(0, band.length - 1);
   const widest = Math.max(0, ...sized.map(widthOf));
-  const layout: Record<string, Position> = {};
+  const layout = emptyRecord<Position>();
   let y = origin.y;
   for (const band of sized) {
     if (band.length === 0) continue;

@@ -2,6 +2,7 @@ import { assignAddresses } from '@/shared/address/assign';
 import type { Adapter, Cable, Connector, Controller, Media, Network, Port, PortSpeed, Topology } from '@/shared/topology/schema';
 import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
 import { layoutBands } from '@/shared/layout/bands';
+import { emptyRecord } from '@/shared/keys/record';
 
 /**
  * The small document builder the patterns share. Ids are readable and derived from names:
@@ -18,7 +19,7 @@ export class PatternBuilder {
   private labelPrefix: string;
 
   constructor(name: string, labelPrefix = '') {
-    this.doc = { format: TOPOLOGY_FORMAT, name, devices: [], cables: [], networks: [], layout: {} };
+    this.doc = { format: TOPOLOGY_FORMAT, name, devices: [], cables: [], networks: [], layout: emptyRecord() };
     this.labelPrefix = labelPrefix;
   }
 

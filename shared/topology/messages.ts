@@ -1,10 +1,11 @@
 import type { z } from 'zod';
 import type { Issue } from '@/shared/api/common';
+import { ownValue } from '@/shared/keys/record';
 
 /**
  * Turns zod's issues into sentences a designer can act on ("Port speed must be one of 1, 2.5, …"),
  * each with the dotted path of the field. Unknown fields get their own path so the editor can point
- * at the exact key.
+ * at the exact key. The tables are read with ownValue: a path may hold a key the sender chose.
  */
 const FIELD_LABELS: Record<string, string> = {
   format: 'The format',
@@ -73,16 +74,17 @@ function fieldLabel(path: PropertyKey[]): string {
   if (path.length === 2 && path[0] === 'layout') return `The position of "${String(last)}"`;
   if (typeof last === 'number') {
     const list = path[path.length - 2];
-    if (typeof list === 'string' && ENTRY_LABELS[list]) return ENTRY_LABELS[list];
+    const entry = typeof list === 'string' ? ownValue(ENTRY_LABELS, list) : undefined;
+    if (entry) return entry;
   }
   const key = [...path].reverse().find((k) => typeof k === 'string');
   if (typeof key !== 'string') return 'The document';
-  return FIELD_LABELS[key] ?? `The field "${key}"`;
+  return ownValue(FIELD_LABELS, key) ?? `The field "${key}"`;
 }
 
 function countWords(path: PropertyKey[], count: unknown): string {
   const key = path[path.length - 1];
-  const nouns = typeof key === 'string' ? ENTRY_NOUNS[key] : undefined;
+  const nouns = typeof key === 'string' ? ownValue(ENTRY_NOUNS, key) : undefined;
   const n = String(count);
   return nouns ? `${n} ${count === 1 ? nouns[0] : nouns[1]}` : n;
 }
@@ -120,7 +122,7 @@ function sentence(issue: ZodIssue, input: unknown): string {
   }
   switch (issue.code) {
     case 'invalid_type':
-      return `${label} must be ${TYPE_WORDS[issue.expected] ?? issue.expected}.`;
+      return `${label} must be ${ownValue(TYPE_WORDS, issue.expected) ?? issue.expected}.`;
     case 'invalid_value':
       return `${label} must be ${issue.values.length > 1 ? 'one of ' : ''}${listWords(issue.values)}.`;
     case 'invalid_union': {

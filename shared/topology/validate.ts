@@ -1,13 +1,19 @@
 import type { Issue } from '@/shared/api/common';
+import { cleanDocumentText } from '@/shared/topology/clean-names';
 import { crossReferenceIssues } from '@/shared/topology/crossref';
+import { readWithLayout } from '@/shared/topology/layout';
 import { describeZodIssues } from '@/shared/topology/messages';
 import { topologySchema, type Topology } from '@/shared/topology/schema';
+import { sizeIssues } from '@/shared/topology/size-limits';
 
 /**
- * The gate every uploaded or edited document passes: zod for shape, then cross-references.
- * It never throws — the server feeds it whatever a user sends — and it caps the list at
- * MAX_ISSUES so a million bad entries cannot become a million-line answer; the last issue then
- * says how many more there were.
+ * The gate every uploaded or edited document passes: the size limits first (list lengths only,
+ * before anything else reads the document), then zod for shape (the layout by a schema that keeps
+ * every device id as a key, see layout.ts), then cross-references; a valid document comes back
+ * with control and bidirectional-override characters taken out of its names and labels
+ * (clean-names.ts). It never throws — the server feeds it whatever a user sends — and it caps the
+ * list at MAX_ISSUES so a million bad entries cannot become a million-line answer; the last issue
+ * then says how many more there were.
  */
 export const MAX_ISSUES = 200;
 
@@ -24,11 +30,13 @@ function capped(issues: Issue[]): Issue[] {
 
 export function validateTopology(input: unknown): ValidationResult {
   try {
-    const parsed = topologySchema.safeParse(input);
+    const tooLarge = sizeIssues(input);
+    if (tooLarge.length > 0) return { ok: false, issues: tooLarge };
+    const parsed = readWithLayout(topologySchema, input);
     if (!parsed.success) return { ok: false, issues: capped(describeZodIssues(parsed.error, input)) };
     const issues = crossReferenceIssues(parsed.data);
     if (issues.length > 0) return { ok: false, issues: capped(issues) };
-    return { ok: true, doc: parsed.data };
+    return { ok: true, doc: cleanDocumentText(parsed.data) };
   } catch (error) {
     // Only pathological input gets here (a getter that throws, a stack overflow on a cyclic
     // structure); it is still the sender's mistake, never a crash.

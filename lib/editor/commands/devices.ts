@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { withPositions } from '@/shared/topology/layout';
 import { SWITCH_ROLES, type Device, type Position, type SwitchRole, type Topology } from '@/shared/topology/schema';
 import { command } from '@/lib/editor/commands/define';
 import { deviceById, kindOf, mapGroups, mapPorts, patch, portsOf, removeCablesAt, removeLayout, replaceDevice } from '@/lib/editor/commands/doc';
@@ -43,7 +44,7 @@ export function addDevice(doc: Topology, args: AddDeviceArgs): Topology {
     throw error;
   }
   const position = args.position ?? freeSpot(doc);
-  return { ...doc, devices: [...doc.devices, device], layout: { ...(doc.layout ?? {}), [device.id]: { x: position.x, y: position.y } } };
+  return { ...doc, devices: [...doc.devices, device], layout: withPositions(doc.layout, [[device.id, { x: position.x, y: position.y }]]) };
 }
 
 export type RenameArgs = { id: string; name: string };

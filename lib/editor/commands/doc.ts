@@ -1,4 +1,5 @@
-import type { Adapter, Controller, Device, Port, Position, Topology } from '@/shared/topology/schema';
+import { withoutPositions } from '@/shared/topology/layout';
+import type { Adapter, Controller, Device, Port, Topology } from '@/shared/topology/schema';
 import { CommandError } from '@/lib/editor/errors';
 
 /**
@@ -109,9 +110,7 @@ export function removeCablesAt(doc: Topology, portIds: ReadonlySet<string>): Top
 
 export function removeLayout(doc: Topology, deviceIds: ReadonlySet<string>): Topology {
   if (!doc.layout || !Object.keys(doc.layout).some((id) => deviceIds.has(id))) return doc;
-  const layout: Record<string, Position> = {};
-  for (const [id, position] of Object.entries(doc.layout)) if (!deviceIds.has(id)) layout[id] = position;
-  return { ...doc, layout };
+  return { ...doc, layout: withoutPositions(doc.layout, deviceIds) };
 }
 
 /** Equal for the plain values commands set (numbers, strings, small address objects). */

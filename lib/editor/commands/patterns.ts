@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { parseCidr } from '@/shared/address/cidr';
 import { PATTERNS, type ManagedFabricOptions } from '@/shared/patterns';
+import { withPositions } from '@/shared/topology/layout';
 import { CHAP_MODES, CONNECTORS, MEDIA, PORT_SPEEDS, type Cable, type Device, type Network, type Topology } from '@/shared/topology/schema';
 import { computeArrangement } from '@/lib/editor/arrange';
 import { autoAssignAddresses } from '@/lib/editor/commands/addressing';
@@ -120,7 +121,7 @@ function merge(doc: Topology, args: ApplyPatternArgs): Topology {
   const devices = mergeDevices(doc, part, ids, maps);
   const cables = mergeCables(doc, part, ids, maps.ports);
   const placed = computeArrangement({ ...part, devices, cables, networks }, { origin: mergeOrigin(doc) });
-  let result: Topology = { ...doc, devices: [...doc.devices, ...devices], cables: [...doc.cables, ...cables], networks, layout: { ...(doc.layout ?? {}), ...placed } };
+  let result: Topology = { ...doc, devices: [...doc.devices, ...devices], cables: [...doc.cables, ...cables], networks, layout: withPositions(doc.layout, Object.entries(placed)) };
   if (args.options?.assignAddresses !== false) result = autoAssignAddresses(result, { portIds: devices.flatMap((d) => portsOf(d).map((p) => p.id)) });
   return result;
 }

@@ -1,6 +1,7 @@
 import { blocksOverlap, formatCidr, hasHostBits, parseCidr, type Cidr } from '@/shared/address/cidr';
 import { byId, dataCables, nameOf, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
+import { tupleKey } from '@/shared/keys/tuple';
 import { LIMITS, LINK_LOCAL_RANGES } from '@/shared/rules/limits';
 import type { Network } from '@/shared/topology/schema';
 import { displayName } from '@/shared/topology/index';
@@ -181,7 +182,7 @@ function mtuFindings(ctx: AnalysisContext): Finding[] {
     if (hostSide.length === 0 || controllerSide.length === 0) continue;
     const data = [...new Set([...hostSide, ...controllerSide])].sort((x, y) => byId(x.id, y.id));
     if (new Set(data.map(mtuOf)).size < 2) continue;
-    const key = data.map((n) => n.id).join('\u0000');
+    const key = tupleKey(data.map((n) => n.id));
     if (seen.has(key)) continue;
     seen.add(key);
     const list = data.map((n) => `${nameOf(ctx, n.id)} (MTU ${n.mtu ?? `${LIMITS.mtuDefault.value} by default`})`).join(', ');

@@ -30,7 +30,17 @@ function portsOf(doc: Topology): Map<string, PortInfo> {
   return ports;
 }
 
-type Table = Map<string, { sessions: number; controllers: Set<string> }>;
+/** Host id → array id → sessions: nested Maps, so no id can be mistaken for a pair of others. */
+type Entry = { sessions: number; controllers: Set<string> };
+type Table = Map<string, Map<string, Entry>>;
+
+function entryOf(table: Table, host: string, array: string): Entry {
+  let arrays = table.get(host);
+  if (!arrays) table.set(host, (arrays = new Map()));
+  let entry = arrays.get(array);
+  if (!entry) arrays.set(array, (entry = { sessions: 0, controllers: new Set() }));
+  return entry;
+}
 
 function sessionsTable(doc: Topology, failed: Set<string>): Table {
   const ports = portsOf(doc);
@@ -69,11 +79,9 @@ function sessionsTable(doc: Topology, failed: Set<string>): Table {
       const cp = ports.get(cpId)!;
       const pairs = doc.networks.length === 0 || !hp.networkId || !cp.networkId || hp.networkId === cp.networkId;
       if (!pairs) continue;
-      const key = `${hp.deviceId}\u0000${cp.deviceId}`;
-      const entry = table.get(key) ?? { sessions: 0, controllers: new Set<string>() };
+      const entry = entryOf(table, hp.deviceId, cp.deviceId);
       entry.sessions += 1;
       entry.controllers.add(cp.unitId);
-      table.set(key, entry);
     }
   }
   return table;
@@ -94,25 +102,29 @@ const order = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 export function bruteForceHosts(doc: Topology, failed: string[] = []): HostArrayResult[] {
   const down = new Set(failed);
   const base = sessionsTable(doc, down);
-  const spof = new Map<string, string[]>();
+  const spof = new Map<Entry, string[]>();
   for (const unit of failureUnits(doc)) {
     if (down.has(unit)) continue;
     const without = sessionsTable(doc, new Set([...down, unit]));
-    for (const key of base.keys()) {
-      if (!without.has(key)) spof.set(key, [...(spof.get(key) ?? []), unit]);
+    for (const [host, arrays] of base) {
+      for (const [array, entry] of arrays) {
+        if (!without.get(host)?.has(array)) spof.set(entry, [...(spof.get(entry) ?? []), unit]);
+      }
     }
   }
-  const result: HostArrayResult[] = [...base.entries()].map(([key, entry]) => {
-    const [host, array] = key.split('\u0000');
-    const units = (spof.get(key) ?? []).sort(order);
-    return {
-      host,
-      array,
-      sessions: entry.sessions,
-      controllersReached: [...entry.controllers].sort(order),
-      singlePointsOfFailure: units,
-      redundant: units.length === 0,
-    };
-  });
+  const result: HostArrayResult[] = [];
+  for (const [host, arrays] of base) {
+    for (const [array, entry] of arrays) {
+      const units = (spof.get(entry) ?? []).sort(order);
+      result.push({
+        host,
+        array,
+        sessions: entry.sessions,
+        controllersReached: [...entry.controllers].sort(order),
+        singlePointsOfFailure: units,
+        redundant: units.length === 0,
+      });
+    }
+  }
   return result.sort((x, y) => order(x.host, y.host) || order(x.array, y.array));
 }
