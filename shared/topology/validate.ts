@@ -1,17 +1,20 @@
 import type { Issue } from '@/shared/api/common';
 import { crossReferenceIssues } from '@/shared/topology/crossref';
+import { readableTopologySchema } from '@/shared/topology/formats';
 import { describeZodIssues } from '@/shared/topology/messages';
-import { topologySchema, type Topology } from '@/shared/topology/schema';
+import type { Topology } from '@/shared/topology/schema';
+import { isFormat1 } from '@/shared/topology/upgrade';
 
 /**
- * The gate every uploaded or edited document passes: zod for shape, then cross-references.
+ * The gate every uploaded or edited document passes: zod for shape, then cross-references. It reads
+ * format 1 and format 2 and always answers format 2 (`from` says which one came in).
  * It never throws — the server feeds it whatever a user sends — and it caps the list at
  * MAX_ISSUES so a million bad entries cannot become a million-line answer; the last issue then
  * says how many more there were.
  */
 export const MAX_ISSUES = 200;
 
-export type ValidationResult = { ok: true; doc: Topology } | { ok: false; issues: Issue[] };
+export type ValidationResult = { ok: true; doc: Topology; from: 1 | 2 } | { ok: false; issues: Issue[] };
 
 function capped(issues: Issue[]): Issue[] {
   if (issues.length <= MAX_ISSUES) return issues;
@@ -24,11 +27,11 @@ function capped(issues: Issue[]): Issue[] {
 
 export function validateTopology(input: unknown): ValidationResult {
   try {
-    const parsed = topologySchema.safeParse(input);
+    const parsed = readableTopologySchema.safeParse(input);
     if (!parsed.success) return { ok: false, issues: capped(describeZodIssues(parsed.error, input)) };
     const issues = crossReferenceIssues(parsed.data);
     if (issues.length > 0) return { ok: false, issues: capped(issues) };
-    return { ok: true, doc: parsed.data };
+    return { ok: true, doc: parsed.data, from: isFormat1(input) ? 1 : 2 };
   } catch (error) {
     // Only pathological input gets here (a getter that throws, a stack overflow on a cyclic
     // structure); it is still the sender's mistake, never a crash.

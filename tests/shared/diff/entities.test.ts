@@ -11,7 +11,7 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         id: 'srv-2',
         kind: 'host',
         name: 'srv-2',
-        rack: 'R2',
+        placement: { rackId: 'rk-r1', ru: 30 },
         adapters: [{ id: 'srv-2.card-1', name: 'card-1', ports: [{ id: 'srv-2.card-1.p1', name: 'p1', role: 'data', speedGbps: 25, connector: 'sfp' }] }],
       });
     });
@@ -24,7 +24,8 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         changes: [
           { field: 'name', before: null, after: 'srv-2' },
           { field: 'kind', before: null, after: 'host' },
-          { field: 'rack', before: null, after: 'R2' },
+          { field: 'rack', before: null, after: 'R1' },
+          { field: 'ru', before: null, after: 30 },
         ],
       },
     ]);
@@ -82,8 +83,7 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
     const after = edited(bay(), (doc) => {
       const array = deviceOf(doc, 'arr-1');
       array.name = 'store-2';
-      array.ru = 22;
-      delete array.rack;
+      array.placement = { rackId: 'rk-r1', ru: 22 };
       host(doc).iqn = 'iqn.2026-01.example.bay:srv-one'; // RFC 7143 §4.2.7.4 iqn. form
       const sw = deviceOf(doc, 'sw-a');
       if (sw.kind === 'switch') sw.role = 'shared';
@@ -96,7 +96,6 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         kind: 'array',
         changes: [
           { field: 'name', before: 'store-1', after: 'store-2' },
-          { field: 'rack', before: 'R1', after: null },
           { field: 'ru', before: 20, after: 22 },
         ],
       },
