@@ -4,3 +4,4 @@ export { cableIdentifier, endIdentifier, portNumber } from '@/shared/schedule/id
 export { lengthEstimator, roundUpToCentimetre, stockLength, STOCK_LENGTHS_M, type LengthEstimator } from '@/shared/schedule/length';
 export { naturalCompare } from '@/shared/schedule/order';
 export type { CableSchedule, ScheduleEnd, ScheduleRow, ScheduleTotal } from '@/shared/schedule/types';
+export { addressTable, cableTable, exportFileName, guardFormula, materialsTable, ADDRESS_COLUMNS, CABLE_COLUMNS, MATERIAL_COLUMNS, type Cell, type Table } from '@/shared/schedule/tables';
