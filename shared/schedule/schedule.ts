@@ -17,11 +17,38 @@ import { MEDIA, type Cable, type Network, type Rack, type Topology } from '@/sha
  */
 const KIND_RANK = { switch: 0, array: 1, host: 2 } as const;
 
+/**
+ * What the schedule needs of a device, worked out once per device rather than once per cable end:
+ * its names, rack and unit, and its rank in the order — the rack's and the device's place in
+ * natural order of their names (unplaced after every rack).
+ */
+type DeviceInfo = { device: string; rack: string | null; ru: number | null; rackRank: number; deviceRank: number };
+type EndKey = { info: DeviceInfo; d: number; g: number; p: number };
 type Keyed = { row: ScheduleRow; near: EndKey; far: EndKey };
-type EndKey = { rack: string | null; ru: number | null; device: string; d: number; g: number; p: number };
+
+function deviceInfos(doc: Topology): Map<string, DeviceInfo> {
+  const racks = new Map<string, Rack>((doc.racks ?? []).map((rack) => [rack.id, rack]));
+  const rankOf = (names: Iterable<string>) => new Map([...new Set(names)].sort(naturalCompare).map((name, i) => [name, i]));
+  const rackRank = rankOf([...racks.values()].map((rack) => displayName(rack)));
+  const deviceRank = rankOf(doc.devices.map((device) => displayName(device)));
+  const infos = new Map<string, DeviceInfo>();
+  for (const device of doc.devices) {
+    const rack = device.placement ? racks.get(device.placement.rackId) : undefined;
+    const rackName = rack ? displayName(rack) : null;
+    const name = displayName(device);
+    infos.set(device.id, {
+      device: name,
+      rack: rackName,
+      ru: rack ? device.placement!.ru : null,
+      rackRank: rackName === null ? Number.MAX_SAFE_INTEGER : rackRank.get(rackName)!,
+      deviceRank: deviceRank.get(name)!,
+    });
+  }
+  return infos;
+}
 
 export function cableSchedule(doc: Topology, index: TopologyIndex = indexTopology(doc)): CableSchedule {
-  const racks = new Map<string, Rack>((doc.racks ?? []).map((rack) => [rack.id, rack]));
+  const infos = deviceInfos(doc);
   const estimate = lengthEstimator(doc);
   const keyed: Keyed[] = [];
   for (const cable of doc.cables) {
@@ -29,8 +56,8 @@ export function cableSchedule(doc: Topology, index: TopologyIndex = indexTopolog
     const y = index.ports.get(cable.b);
     // A valid document has both ends; a draft being edited may not, and gets no row for that cable.
     if (!x || !y) continue;
-    const kx = endKey(x, racks);
-    const ky = endKey(y, racks);
+    const kx: EndKey = { info: infos.get(x.device.id)!, d: x.deviceIndex, g: x.groupIndex, p: x.portIndex };
+    const ky: EndKey = { info: infos.get(y.device.id)!, d: y.deviceIndex, g: y.groupIndex, p: y.portIndex };
     const xNear = KIND_RANK[x.device.kind] < KIND_RANK[y.device.kind] || (x.device.kind === y.device.kind && compareKeys(kx, ky) <= 0);
     const [near, far, nearKey, farKey] = xNear ? [x, y, kx, ky] : [y, x, ky, kx];
     keyed.push({ row: scheduleRow(cable, near, far, nearKey, farKey, index, estimate), near: nearKey, far: farKey });
@@ -41,8 +68,8 @@ export function cableSchedule(doc: Topology, index: TopologyIndex = indexTopolog
 }
 
 function scheduleRow(cable: Cable, near: PortRef, far: PortRef, nearKey: EndKey, farKey: EndKey, index: TopologyIndex, estimate: ReturnType<typeof lengthEstimator>): ScheduleRow {
-  const a = scheduleEnd(near, nearKey);
-  const b = scheduleEnd(far, farKey);
+  const a = scheduleEnd(near, nearKey.info);
+  const b = scheduleEnd(far, farKey.info);
   const estimatedLengthM = estimate(near.device, far.device);
   const lengthM = cable.lengthM ?? null;
   const network = cableNetwork(near, far, index);
@@ -61,33 +88,17 @@ function scheduleRow(cable: Cable, near: PortRef, far: PortRef, nearKey: EndKey,
   };
 }
 
-function endKey(ref: PortRef, racks: Map<string, Rack>): EndKey {
-  const placement = ref.device.placement;
-  const rack = placement ? racks.get(placement.rackId) : undefined;
-  return {
-    rack: rack ? displayName(rack) : null,
-    ru: rack && placement ? placement.ru : null,
-    device: displayName(ref.device),
-    d: ref.deviceIndex,
-    g: ref.groupIndex,
-    p: ref.portIndex,
-  };
-}
-
-function scheduleEnd(ref: PortRef, key: EndKey): ScheduleEnd {
+function scheduleEnd(ref: PortRef, info: DeviceInfo): ScheduleEnd {
   const part = ref.adapter ?? ref.controller;
-  return { deviceId: ref.device.id, device: key.device, part: part ? displayName(part) : null, port: displayName(ref.port), rack: key.rack, ru: key.ru };
+  return { deviceId: ref.device.id, device: info.device, part: part ? displayName(part) : null, port: displayName(ref.port), rack: info.rack, ru: info.ru };
 }
 
 function compareKeys(x: EndKey, y: EndKey): number {
-  if (x.rack !== y.rack) {
-    if (x.rack === null) return 1;
-    if (y.rack === null) return -1;
-    const byRack = naturalCompare(x.rack, y.rack);
-    if (byRack !== 0) return byRack;
-  }
-  if (x.ru !== y.ru) return x.ru === null ? 1 : y.ru === null ? -1 : x.ru - y.ru;
-  return naturalCompare(x.device, y.device) || x.d - y.d || x.g - y.g || x.p - y.p;
+  const a = x.info;
+  const b = y.info;
+  if (a.rackRank !== b.rackRank) return a.rackRank - b.rackRank;
+  if (a.ru !== b.ru) return a.ru === null ? 1 : b.ru === null ? -1 : a.ru - b.ru;
+  return a.deviceRank - b.deviceRank || x.d - y.d || x.g - y.g || x.p - y.p;
 }
 
 /** The network a cable carries: that of its host or controller end (near end first); none between switches. */

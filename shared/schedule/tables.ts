@@ -32,9 +32,10 @@ export function materialsTable(schedule: CableSchedule): Table {
 }
 
 /**
- * The address worksheet: one row per port of every host and controller (data and management
- * ports alike, spare ones too, so the sheet matches the hardware), with its network's subnet, VLAN,
- * MTU and gateway and the port's address (`dhcp` for a DHCP port). Switch ports have no address.
+ * The address worksheet: one row per host and controller port that takes part — data and
+ * management ports on a network, with an address, or cabled — with its network's subnet, VLAN, MTU
+ * and gateway and the port's address (`dhcp` for a DHCP port). A spare port with none of these has
+ * nothing to configure and is left out; switch ports have no address.
  */
 export function addressTable(doc: Topology): Table {
   const index = indexTopology(doc);
@@ -44,6 +45,7 @@ export function addressTable(doc: Topology): Table {
     if (!part) continue;
     const network = ref.port.networkId === undefined ? undefined : index.networks.get(ref.port.networkId);
     const address = ref.port.address;
+    if (!network && !address && !index.cablesByPort.has(ref.port.id)) continue;
     rows.push([
       displayName(ref.device),
       displayName(part),

@@ -95,13 +95,14 @@ describe('CSV exports', () => {
     expect(rows).toHaveLength(28);
   });
 
-  it('addresses.csv: one row per host and controller port with its network', async () => {
+  it('addresses.csv: one row per host and controller port in use, with its network', async () => {
     const res = await ravi().get(`/api/designs/${id}/versions/2/addresses.csv`).expect(200);
     expect(res.text.split('\r\n')[0]).toBe('device,part,port,role,network,cidr,vlan,mtu,address,gateway');
     const { rows } = parseCsv(res.text);
     expect(rows).toEqual(asCsv(addressTable(harborV2())));
-    // 2 controllers × 5 ports, 6 hosts × (2 cards × 2 ports + 1 onboard management port).
-    expect(rows).toHaveLength(40);
+    // 2 controllers × 5 ports, 6 hosts × (2 storage ports + 1 onboard management port); the spare p2 of each card is left out.
+    expect(rows).toHaveLength(28);
+    expect(rows.filter((r) => r[0] === 'wms-db-1').map((r) => `${r[1]} ${r[2]}`)).toEqual(['card-1 p1', 'card-2 p1', 'onboard mgmt']);
     expect(rows).toContainEqual(['vault-1', 'ctl-a', 'p1', 'data', 'fabric A', '198.51.100.0/24', '110', '9000', '198.51.100.1', '']); // RFC 5737 §3
     expect(rows).toContainEqual(['vault-1', 'ctl-b', 'mgmt', 'management', 'management', '192.0.2.0/24', '10', '1500', '192.0.2.3', '192.0.2.1']); // RFC 5737 §3
   });
