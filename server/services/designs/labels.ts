@@ -12,7 +12,7 @@ export async function loadLabelHistory(models: Models, designId: number, transac
   const rows = await models.DesignVersion.findAll({ attributes: ['id'], where: { designId }, order: [['number', 'ASC']], transaction });
   const versions: { cables: Cable[] }[] = [];
   for (const { id } of rows) {
-    const row = await models.DesignVersion.findByPk(id, { attributes: ['id', 'document'], transaction });
+    const [row] = await models.DesignVersion.findAll({ attributes: ['id', 'document'], where: { id }, transaction });
     if (!row) continue;
     const doc = JSON.parse(row.document) as { cables?: Cable[] };
     versions.push({ cables: Array.isArray(doc.cables) ? doc.cables : [] });
