@@ -203,3 +203,32 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
     expect(diff.empty).toBe(false);
   });
 });
+
+describe('diff of the room (format 2)', () => {
+  it('lists a rack, a feed and the site as document changes, and a device’s rack by name', () => {
+    const after = edited(bay(), (doc) => {
+      doc.racks!.push({ id: 'rk-r2', name: 'R2', row: 'A', position: 2, heightU: 48 });
+      doc.racks![0].position = 3;
+      doc.powerFeeds = [{ id: 'feed-a', name: 'Feed A' }];
+      doc.site = { rackPitchMm: 800 };
+      deviceOf(doc, 'arr-1').placement = { rackId: 'rk-r2', ru: 20 };
+      deviceOf(doc, 'sw-a').psus = [{ id: 'sw-a.psu1', name: 'PSU 1', feedId: 'feed-a' }];
+    });
+    const diff = diffTopologies(bay(), after);
+    expect(diff.document).toEqual([
+      { field: 'site.rackPitchMm', before: 600, after: 800 }, // 600 mm: the format's default pitch
+      { field: 'rack rk-r1', before: 'R1, row A, position 1, 42U', after: 'R1, row A, position 3, 42U' },
+      { field: 'rack rk-r2', before: null, after: 'R2, row A, position 2, 48U' },
+      { field: 'power feed feed-a', before: null, after: 'Feed A' },
+    ]);
+    expect(diff.devices.changed).toEqual([
+      { id: 'arr-1', name: 'store-1', kind: 'array', changes: [{ field: 'rack', before: 'R1', after: 'R2' }] },
+      { id: 'sw-a', name: 'sw-a', kind: 'switch', changes: [{ field: 'psus', before: null, after: 'PSU 1 (Feed A)' }] },
+    ]);
+  });
+
+  it('reads an absent site as the defaults, so writing the defaults out is no change', () => {
+    const after = edited(bay(), (doc) => (doc.site = { rackPitchMm: 600, rowPitchMm: 1200, slackM: 0.5 }));
+    expect(diffTopologies(bay(), after).empty).toBe(true);
+  });
+});
