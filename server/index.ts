@@ -5,6 +5,7 @@ import { openDatabase } from './db';
 import { createMailer } from './mail/mailer';
 import { migrate } from './migrate';
 import { seedDemo, type DemoAccount } from './seed';
+import { closeWorkbookPool } from './services/build-sheet/xlsx-pool';
 import { createPasswords } from './services/passwords';
 
 export type RunningServer = { url: string; close: () => Promise<void> };
@@ -43,6 +44,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         server.closeIdleConnections();
       });
       await mailer.close();
+      await closeWorkbookPool();
       await sequelize.close();
     },
   };

@@ -23,6 +23,12 @@ function iqnSuggestion(doc: Topology, device: Device): string | null {
   return null;
 }
 
+/** The printed name of the rack the device is placed in, or empty. */
+function rackName(doc: Topology, device: Device): string {
+  const rackId = device.placement?.rackId;
+  return rackId === undefined ? '' : (doc.racks?.find((r) => r.id === rackId)?.name ?? '');
+}
+
 type Props = { device: Device; doc: Topology; readOnly: boolean };
 
 /** A device: its name, role (switch) or initiator name (host), rack place, parts and findings. */
@@ -60,10 +66,10 @@ export function DeviceInspector({ device, doc, readOnly }: Props) {
       ) : null}
       <View style={styles.row}>
         <View style={styles.cell}>
-          <CommitField label="Rack" value={device.rack ?? ''} schema={rackField} readOnly={readOnly} testID="inspector-rack" onCommit={(rack) => runEdit('setDevice', { id: device.id, rack })} />
+          <CommitField label="Rack" value={rackName(doc, device)} schema={rackField} readOnly={readOnly} testID="inspector-rack" onCommit={(rack) => runEdit('setDevice', { id: device.id, rack })} />
         </View>
         <View style={styles.cell}>
-          <CommitField label="Rack unit" value={device.ru === undefined ? '' : String(device.ru)} schema={ruField} readOnly={readOnly} keyboardType="number-pad" testID="inspector-ru" onCommit={(ru) => runEdit('setDevice', { id: device.id, ru })} />
+          <CommitField label="Rack unit" value={device.placement ? String(device.placement.ru) : ''} schema={ruField} readOnly={readOnly} keyboardType="number-pad" testID="inspector-ru" onCommit={(ru) => runEdit('setDevice', { id: device.id, ru })} />
         </View>
       </View>
       {device.kind === 'host' ? <HostPaths hostId={device.id} doc={doc} /> : null}

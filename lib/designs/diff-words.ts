@@ -8,7 +8,9 @@ const FIELD_WORDS: Record<string, string> = {
   role: 'role',
   rack: 'rack',
   ru: 'rack unit',
-  iqn: 'initiator name',
+  heightU: 'height (U)',
+  psus: 'power supplies',
+  iqn: 'iSCSI name',
   device: 'device',
   group: 'controller or card',
   speedGbps: 'speed (Gb/s)',
@@ -26,6 +28,9 @@ const FIELD_WORDS: Record<string, string> = {
   mtu: 'MTU',
   gateway: 'gateway',
   'security.chap': 'CHAP',
+  'site.rackPitchMm': 'rack pitch (mm)',
+  'site.rowPitchMm': 'row pitch (mm)',
+  'site.slackM': 'cable slack (m)',
 };
 
 export const SECTION_TITLES: Record<DiffSectionName, string> = {

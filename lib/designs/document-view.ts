@@ -1,3 +1,4 @@
+import { occupiedUnits } from '@/shared/racks/geometry';
 import { displayName, indexTopology, otherEnd, portLabel, type TopologyIndex } from '@/shared/topology';
 import type { Address, Cable, Device, Port, Topology } from '@/shared/topology/schema';
 
@@ -51,7 +52,10 @@ export function deviceViews(doc: Topology, index: TopologyIndex = indexTopology(
     const details: string[] = [];
     if (device.kind === 'switch') details.push(SWITCH_ROLE_WORDS[device.role]);
     if (device.kind === 'host' && device.iqn) details.push(`initiator ${device.iqn}`);
-    if (device.rack) details.push(`rack ${device.rack}${device.ru ? `, unit ${device.ru}` : ''}`);
+    const rack = device.placement && doc.racks?.find((r) => r.id === device.placement!.rackId);
+    const units = occupiedUnits(device);
+    if (rack && units) details.push(`rack ${displayName(rack)}, ${units.top === units.bottom ? `unit ${units.bottom}` : `units ${units.bottom}–${units.top}`}`);
+    if (device.kind === 'array' && device.iqn) details.push(`target ${device.iqn}`);
     const groups: GroupView[] =
       device.kind === 'switch'
         ? [{ id: device.id, title: 'Ports', ports: device.ports.map((p) => portRow(p, index)) }]

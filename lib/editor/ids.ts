@@ -8,8 +8,11 @@ import { iteratePorts } from '@/shared/topology/index';
  */
 export function collectIds(doc: Topology): Set<string> {
   const ids = new Set<string>();
+  for (const rack of doc.racks ?? []) ids.add(rack.id);
+  for (const feed of doc.powerFeeds ?? []) ids.add(feed.id);
   for (const device of doc.devices) {
     ids.add(device.id);
+    for (const psu of device.psus ?? []) ids.add(psu.id);
     if (device.kind === 'array') for (const c of device.controllers) ids.add(c.id);
     if (device.kind === 'host') for (const a of device.adapters) ids.add(a.id);
   }

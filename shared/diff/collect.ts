@@ -1,6 +1,6 @@
 import type { GroupKind } from '@/shared/diff/types';
 import { displayName } from '@/shared/topology';
-import type { Adapter, Cable, Controller, Device, Network, Port, Topology } from '@/shared/topology/schema';
+import type { Adapter, Cable, Controller, Device, Network, Port, PowerFeed, Rack, Topology } from '@/shared/topology/schema';
 
 /**
  * One version's things, keyed by id, in the shape the section specs compare. One pass over the
@@ -17,6 +17,8 @@ export type Collected = {
   ports: Map<string, PortItem>;
   cables: Map<string, Cable>;
   networks: Map<string, Network>;
+  racks: Map<string, Rack>;
+  feeds: Map<string, PowerFeed>;
 };
 
 function addPorts(into: Collected, ports: Port[], device: Device, group?: Controller | Adapter) {
@@ -26,7 +28,9 @@ function addPorts(into: Collected, ports: Port[], device: Device, group?: Contro
 }
 
 export function collect(doc: Topology): Collected {
-  const into: Collected = { devices: new Map(), groups: new Map(), ports: new Map(), cables: new Map(), networks: new Map() };
+  const into: Collected = { devices: new Map(), groups: new Map(), ports: new Map(), cables: new Map(), networks: new Map(), racks: new Map(), feeds: new Map() };
+  for (const rack of doc.racks ?? []) into.racks.set(rack.id, rack);
+  for (const feed of doc.powerFeeds ?? []) into.feeds.set(feed.id, feed);
   for (const device of doc.devices) {
     into.devices.set(device.id, device);
     if (device.kind === 'switch') {
@@ -71,6 +75,16 @@ export function deviceIdName(side: Collected, deviceId: string): string {
 export function networkIdName(side: Collected, networkId: string): string {
   const network = side.networks.get(networkId);
   return network ? displayName(network) : networkId;
+}
+
+export function rackIdName(side: Collected, rackId: string): string {
+  const rack = side.racks.get(rackId);
+  return rack ? displayName(rack) : rackId;
+}
+
+export function feedIdName(side: Collected, feedId: string): string {
+  const feed = side.feeds.get(feedId);
+  return feed ? displayName(feed) : feedId;
 }
 
 export function groupIdName(side: Collected, groupId: string): string {

@@ -1,10 +1,16 @@
-import type { FieldChange } from '@/shared/diff/types';
+import type { DiffValue, FieldChange } from '@/shared/diff/types';
+import { rackHeightU, resolvedSite } from '@/shared/racks/geometry';
+import { displayName } from '@/shared/topology/index';
 import { positionOf } from '@/shared/topology/layout';
-import type { Topology } from '@/shared/topology/schema';
+import type { PowerFeed, Rack, Topology } from '@/shared/topology/schema';
 
 /**
  * The document's own fields, and the layout count. `format` is not compared: both documents have
- * been read as format 1 before they get here (older formats are migrated on import).
+ * been read as format 2 before they get here (format 1 is upgraded on read).
+ *
+ * The room is part of the document too: the site's pitches and slack (absent reads as the format's
+ * defaults, so writing a default out is no change), and each rack and power feed, added, removed
+ * or changed, as one field `rack <id>` / `power feed <id>` whose value describes it in words.
  */
 export function documentChanges(before: Topology, after: Topology): FieldChange[] {
   const changes: FieldChange[] = [];
@@ -13,7 +19,31 @@ export function documentChanges(before: Topology, after: Topology): FieldChange[
   const chapBefore = before.security?.chap ?? 'none';
   const chapAfter = after.security?.chap ?? 'none';
   if (chapBefore !== chapAfter) changes.push({ field: 'security.chap', before: chapBefore, after: chapAfter });
+  const siteBefore = resolvedSite(before);
+  const siteAfter = resolvedSite(after);
+  for (const key of ['rackPitchMm', 'rowPitchMm', 'slackM'] as const) {
+    if (siteBefore[key] !== siteAfter[key]) changes.push({ field: `site.${key}`, before: siteBefore[key], after: siteAfter[key] });
+  }
+  listChanges(changes, 'rack', before.racks ?? [], after.racks ?? [], rackText);
+  listChanges(changes, 'power feed', before.powerFeeds ?? [], after.powerFeeds ?? [], (feed) => displayName(feed));
   return changes;
+}
+
+function rackText(rack: Rack): string {
+  const where = [rack.row !== undefined ? `row ${rack.row}` : null, rack.position !== undefined ? `position ${rack.position}` : null].filter(Boolean);
+  return `${displayName(rack)}${where.length ? `, ${where.join(', ')}` : ''}, ${rackHeightU(rack)}U`;
+}
+
+/** One change per id whose description differs, ids in code-unit order. */
+function listChanges<T extends Rack | PowerFeed>(changes: FieldChange[], word: string, before: T[], after: T[], text: (item: T) => string): void {
+  const was = new Map<string, DiffValue>(before.map((item) => [item.id, text(item)]));
+  const now = new Map<string, DiffValue>(after.map((item) => [item.id, text(item)]));
+  const ids = [...new Set([...was.keys(), ...now.keys()])].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  for (const id of ids) {
+    const b = was.get(id) ?? null;
+    const a = now.get(id) ?? null;
+    if (b !== a) changes.push({ field: `${word} ${id}`, before: b, after: a });
+  }
 }
 
 /**

@@ -18,8 +18,10 @@ export * from '@/shared/diff/types';
  * What changed between two versions' topology documents, for the versions screen and the diff route.
  *
  * Sections, each with `added`, `removed` and `changed` entries sorted by id:
- * - `devices`: name, kind, role (switches), rack, ru, iqn (hosts);
- * - `groups`: controllers and adapters (cards) as their own section — name and owning device — so
+ * - `devices`: name, kind, role (switches), rack (by id, shown by name), ru, heightU, iqn (hosts'
+ *   initiator and arrays' target name), psus;
+ * - `groups`: controllers and adapters (cards) as their own section — name, owning device, a
+ *   controller's own target name — so
  *   a card added to a host reads as one entry, not as a change buried in the host;
  * - `ports`: name, role, speedGbps, connector, network, and the device and group holding it;
  * - `addresses`: one entry per port whose address came, went or changed (kept apart from `ports`
@@ -27,7 +29,8 @@ export * from '@/shared/diff/types';
  * - `cables`: ends (a, b — shown as "device / card port"; a cable turned end for end is unchanged),
  *   media, lengthM, label;
  * - `networks`: name, purpose, cidr, vlan, mtu, gateway;
- * plus `document` (name, security.chap).
+ * plus `document` (name, security.chap, site.*, and one `rack <id>` / `power feed <id>` per rack or
+ * feed added, removed or changed).
  *
  * Things are matched by id, so reordering devices or ports is no change. Canvas positions are not
  * part of the design: they never make the diff non-empty and are only counted in `layoutMoved`.

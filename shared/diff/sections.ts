@@ -5,6 +5,8 @@ import {
   groupLabel,
   networkIdName,
   portIdLabel,
+  rackIdName,
+  feedIdName,
   portLabel,
   type Collected,
   type GroupItem,
@@ -45,14 +47,28 @@ function sameCidr(before: DiffValue, after: DiffValue): boolean {
   return bPrefix !== undefined && Number(bPrefix) === Number(aPrefix) && sameIp(bIp, aIp);
 }
 
+/** A device's power supplies, compared by ids and names (a feed by its id, so renaming a feed changes the feed only). */
+function psuKey(device: Device): DiffValue {
+  if (!device.psus?.length) return null;
+  return device.psus.map((psu) => `${psu.id}\u0000${psu.name}\u0000${psu.feedId ?? ''}`).join('\u0001');
+}
+
+/** …and shown as "PSU 1 (Feed A), PSU 2 (no feed)". */
+function psuText(device: Device, side: Collected): DiffValue {
+  if (!device.psus?.length) return null;
+  return device.psus.map((psu) => `${displayName(psu)} (${psu.feedId === undefined ? 'no feed' : feedIdName(side, psu.feedId)})`).join(', ');
+}
+
 export const deviceSection: SectionSpec<Device, Collected, DeviceDiffEntry> = {
   fields: [
     { field: 'name', key: (d) => d.name },
     { field: 'kind', key: (d) => d.kind },
     { field: 'role', key: (d) => (d.kind === 'switch' ? d.role : null) },
-    { field: 'rack', key: (d) => opt(d.rack) },
-    { field: 'ru', key: (d) => opt(d.ru) },
-    { field: 'iqn', key: (d) => (d.kind === 'host' ? opt(d.iqn) : null) },
+    { field: 'rack', key: (d) => opt(d.placement?.rackId), show: (d, side) => (d.placement ? rackIdName(side, d.placement.rackId) : null) },
+    { field: 'ru', key: (d) => opt(d.placement?.ru) },
+    { field: 'heightU', key: (d) => opt(d.placement?.heightU) },
+    { field: 'iqn', key: (d) => (d.kind === 'switch' ? null : opt(d.iqn)) },
+    { field: 'psus', key: psuKey, show: psuText },
   ],
   describe: (id, d) => ({ id, name: displayName(d), kind: d.kind }),
 };
@@ -62,6 +78,7 @@ export const groupSection: SectionSpec<GroupItem, Collected, GroupDiffEntry> = {
     { field: 'name', key: (g) => g.group.name },
     { field: 'kind', key: (g) => g.kind },
     { field: 'device', key: (g) => g.device.id, show: (g) => displayName(g.device) },
+    { field: 'iqn', key: (g) => ('iqn' in g.group ? opt(g.group.iqn) : null) },
   ],
   describe: (id, g) => ({ id, name: groupLabel(g), kind: g.kind, device: displayName(g.device) }),
 };

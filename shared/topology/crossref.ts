@@ -3,11 +3,12 @@ import type { Topology } from '@/shared/topology/schema';
 import { iteratePorts, portPath } from '@/shared/topology/index';
 
 /**
- * The checks zod cannot make one value at a time: ids unique across the whole document, cable ends
- * that are existing and different ports, network references that resolve to networks, switch ports
+ * The checks zod cannot make one value at a time: ids unique across the whole document (racks,
+ * power feeds and PSUs included), cable ends that are existing and different ports, network
+ * references that resolve to networks, placements naming racks and PSUs naming feeds, switch ports
  * without networkId or address (a switch carries every network), and layout keys naming devices.
  */
-type Kind = 'device' | 'controller' | 'card' | 'port' | 'cable' | 'network';
+type Kind = 'device' | 'controller' | 'card' | 'port' | 'cable' | 'network' | 'rack' | 'power feed' | 'PSU';
 
 /**
  * The first holder of an id, and every kind that claimed it: when an id is used twice, the
@@ -30,8 +31,11 @@ function collectIds(doc: Topology, issues: Issue[]): Map<string, Owner> {
     }
     owners.set(value, { kind, path, kinds: new Set([kind]) });
   };
+  doc.racks?.forEach((rack, i) => claim(rack.id, 'rack', `racks.${i}`));
+  doc.powerFeeds?.forEach((feed, i) => claim(feed.id, 'power feed', `powerFeeds.${i}`));
   doc.devices.forEach((device, d) => {
     claim(device.id, 'device', `devices.${d}`);
+    device.psus?.forEach((psu, i) => claim(psu.id, 'PSU', `devices.${d}.psus.${i}`));
     if (device.kind === 'array') {
       device.controllers.forEach((c, i) => claim(c.id, 'controller', `devices.${d}.controllers.${i}`));
     } else if (device.kind === 'host') {
@@ -92,6 +96,22 @@ function checkPorts(doc: Topology, owners: Map<string, Owner>, issues: Issue[]):
   }
 }
 
+/** A reference that must name a thing of one kind: missing, or of another kind, is one issue. */
+function checkReference(owners: Map<string, Owner>, value: string, kind: Kind, path: string, issues: Issue[]): void {
+  const target = owners.get(value);
+  if (!target) issues.push({ path, message: `No ${kind} has the id "${value}".` });
+  else if (!target.kinds.has(kind)) issues.push({ path, message: `"${value}" is a ${target.kind}, not a ${kind}.` });
+}
+
+function checkPlacementsAndPower(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
+  doc.devices.forEach((device, d) => {
+    if (device.placement) checkReference(owners, device.placement.rackId, 'rack', `devices.${d}.placement.rackId`, issues);
+    device.psus?.forEach((psu, i) => {
+      if (psu.feedId !== undefined) checkReference(owners, psu.feedId, 'power feed', `devices.${d}.psus.${i}.feedId`, issues);
+    });
+  });
+}
+
 function checkLayout(doc: Topology, owners: Map<string, Owner>, issues: Issue[]): void {
   for (const key of Object.keys(doc.layout ?? {})) {
     if (!owners.get(key)?.kinds.has('device')) {
@@ -105,6 +125,7 @@ export function crossReferenceIssues(doc: Topology): Issue[] {
   const owners = collectIds(doc, issues);
   checkCables(doc, owners, issues);
   checkPorts(doc, owners, issues);
+  checkPlacementsAndPower(doc, owners, issues);
   checkLayout(doc, owners, issues);
   return issues;
 }

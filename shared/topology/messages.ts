@@ -35,9 +35,22 @@ const FIELD_LABELS: Record<string, string> = {
   devices: 'The device list',
   cables: 'The cable list',
   networks: 'The network list',
-  iqn: 'The initiator name',
+  iqn: 'The iSCSI name',
   rack: 'The rack',
   ru: 'The rack unit',
+  site: 'The site',
+  rackPitchMm: 'The rack pitch (mm)',
+  rowPitchMm: 'The row pitch (mm)',
+  slackM: 'The slack (m)',
+  racks: 'The rack list',
+  row: 'The row',
+  position: 'The position in the row',
+  heightU: 'The height in rack units',
+  powerFeeds: 'The power feed list',
+  placement: 'The placement',
+  rackId: 'The rack reference',
+  psus: 'The power supply list',
+  feedId: 'The power feed reference',
   x: 'The x position',
   y: 'The y position',
 };
@@ -62,6 +75,9 @@ const ENTRY_LABELS: Record<string, string> = {
   ports: 'The port',
   cables: 'The cable',
   networks: 'The network',
+  racks: 'The rack',
+  powerFeeds: 'The power feed',
+  psus: 'The power supply',
 };
 
 /** Counted nouns for list lengths: "at least 1 controller". */
@@ -148,6 +164,18 @@ function sentence(issue: ZodIssue, input: unknown): string {
   }
 }
 
+/** Format 1 fields that format 2 moved: where they went, for the unknown-key sentence. */
+const MOVED_IN_FORMAT_2: Record<string, string> = {
+  rack: 'a device is placed with "placement": {"rackId", "ru"} and the rack is listed under "racks"',
+  ru: 'the unit is "placement.ru"',
+};
+
+function unknownKeyMessage(key: string, input: unknown): string {
+  const format = valueAt(input, ['format']) === 'cablewright.topology/1' ? 1 : 2;
+  const moved = format === 2 && Object.hasOwn(MOVED_IN_FORMAT_2, key) ? `; in format 2 ${MOVED_IN_FORMAT_2[key]}` : '';
+  return `"${key}" is not a field of this object in format ${format}${moved ? moved : '; remove it'}.`;
+}
+
 /** Every zod issue as `{path, message}`; one issue per unknown key. */
 export function describeZodIssues(error: z.ZodError, input: unknown): Issue[] {
   const issues: Issue[] = [];
@@ -155,10 +183,7 @@ export function describeZodIssues(error: z.ZodError, input: unknown): Issue[] {
     const base = issue.path.map(String);
     if (issue.code === 'unrecognized_keys') {
       for (const key of issue.keys) {
-        issues.push({
-          path: [...base, key].join('.'),
-          message: `"${key}" is not a field of this object in format 1; remove it.`,
-        });
+        issues.push({ path: [...base, key].join('.'), message: unknownKeyMessage(key, input) });
       }
       continue;
     }

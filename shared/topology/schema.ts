@@ -3,17 +3,23 @@ import { isValidCidr } from '@/shared/address/cidr';
 import { isValidIp } from '@/shared/address/ip';
 
 /**
- * Topology document, format 1 — the executable form of the format page. Only what makes a document
+ * Topology document, format 2 — the executable form of the format page. Only what makes a document
  * unreadable is rejected here; every drafting mistake is left to the analysis as a finding, so a
- * draft can always be saved. Cross-references (unique ids, cable ends, network ids) are checked in
- * validate.ts because zod sees one value at a time.
+ * draft can always be saved. Cross-references (unique ids, cable ends, network, rack and feed ids)
+ * are checked in crossref.ts because zod sees one value at a time. Format 1 (format1.ts) is still
+ * read: validate.ts upgrades it on the way in (upgrade.ts), so everything past the gate sees format 2.
+ *
+ * Format 2 adds, all optional: `site` (rack and row pitches, slack), `racks`, `powerFeeds`, a
+ * device's `placement` (rack, lowest unit, height) and `psus`, and target names (`iqn`) on arrays
+ * and controllers. A device's format 1 `rack`/`ru` became `placement`.
  *
  * Addresses: a malformed IP address or CIDR is rejected (not a dotted quad or IPv6 text, a prefix
  * longer than the family, a prefix with leading zeros). A CIDR written with host bits set
  * (`198.51.100.7/24`) is well formed and unambiguous — it is read as the block it lies in — so it
  * is a drafting slip: accepted here and reported by the analysis as `cidr-host-bits`.
  */
-export const TOPOLOGY_FORMAT = 'cablewright.topology/1';
+export const TOPOLOGY_FORMAT = 'cablewright.topology/2';
+export const TOPOLOGY_FORMAT_1 = 'cablewright.topology/1';
 
 export const PORT_SPEEDS = [1, 2.5, 5, 10, 25, 40, 50, 100] as const;
 export const CONNECTORS = ['rj45', 'sfp'] as const;
@@ -31,11 +37,19 @@ export type PortRole = (typeof PORT_ROLES)[number];
 export type SwitchRole = (typeof SWITCH_ROLES)[number];
 export type NetworkPurpose = (typeof NETWORK_PURPOSES)[number];
 export type ChapMode = (typeof CHAP_MODES)[number];
+export type DeviceKind = (typeof DEVICE_KINDS)[number];
+
+/** The format page's defaults for what a drafting designer may leave out. */
+export const DEFAULT_SITE = { rackPitchMm: 600, rowPitchMm: 1200, slackM: 0.5 } as const;
+export const DEFAULT_RACK_HEIGHT_U = 42;
+export const DEFAULT_DEVICE_HEIGHT_U: Record<DeviceKind, number> = { array: 2, switch: 1, host: 1 };
+/** The tallest rack (and so the highest unit) a document may name; taller is unreadable, not a draft. */
+export const MAX_RACK_UNITS = 100;
 
 const id = z.string().min(1, 'must not be empty').max(200, 'must be at most 200 characters');
 const name = z.string().max(200, 'must be at most 200 characters');
-const rack = z.string().max(100, 'must be at most 100 characters').optional();
-const ru = z.number().int().min(1).max(100).optional();
+const units = z.number().int().min(1).max(MAX_RACK_UNITS);
+const iqn = z.string().max(1000).optional();
 
 export const addressSchema = z.discriminatedUnion('mode', [
   z
@@ -59,7 +73,16 @@ export const portSchema = z
   })
   .strict();
 
-export const controllerSchema = z.object({ id, name, ports: z.array(portSchema) }).strict();
+/** Where a device sits: `ru` is the lowest unit it occupies, counted from the bottom, 1-based. */
+export const placementSchema = z.object({ rackId: id, ru: units, heightU: units.optional() }).strict();
+
+/** One power supply of a device, optionally on a feed. */
+export const psuSchema = z.object({ id, name, feedId: id.optional() }).strict();
+
+const psus = z.array(psuSchema).optional();
+const placement = placementSchema.optional();
+
+export const controllerSchema = z.object({ id, name, iqn, ports: z.array(portSchema) }).strict();
 export const adapterSchema = z.object({ id, name, ports: z.array(portSchema) }).strict();
 
 export const arraySchema = z
@@ -67,9 +90,10 @@ export const arraySchema = z
     id,
     kind: z.literal('array'),
     name,
+    iqn,
     controllers: z.array(controllerSchema).min(1).max(4),
-    rack,
-    ru,
+    placement,
+    psus,
   })
   .strict();
 
@@ -80,8 +104,8 @@ export const switchSchema = z
     name,
     role: z.enum(SWITCH_ROLES),
     ports: z.array(portSchema),
-    rack,
-    ru,
+    placement,
+    psus,
   })
   .strict();
 
@@ -90,10 +114,10 @@ export const hostSchema = z
     id,
     kind: z.literal('host'),
     name,
-    iqn: z.string().max(1000).optional(),
+    iqn,
     adapters: z.array(adapterSchema),
-    rack,
-    ru,
+    placement,
+    psus,
   })
   .strict();
 
@@ -124,10 +148,35 @@ export const networkSchema = z
 
 export const positionSchema = z.object({ x: z.number(), y: z.number() }).strict();
 
+/** Distances of the room, for cable-length estimates; each one falls back to DEFAULT_SITE. */
+export const siteSchema = z
+  .object({
+    rackPitchMm: z.number().positive().max(1_000_000).optional(),
+    rowPitchMm: z.number().positive().max(1_000_000).optional(),
+    slackM: z.number().min(0).max(1000).optional(),
+  })
+  .strict();
+
+export const rackSchema = z
+  .object({
+    id,
+    /** The identifier printed on labels, e.g. `A01`. */
+    name,
+    row: z.string().max(100, 'must be at most 100 characters').optional(),
+    position: z.number().int().min(1).max(100_000).optional(),
+    heightU: units.optional(),
+  })
+  .strict();
+
+export const powerFeedSchema = z.object({ id, name }).strict();
+
 export const topologySchema = z
   .object({
     format: z.literal(TOPOLOGY_FORMAT),
     name,
+    site: siteSchema.optional(),
+    racks: z.array(rackSchema).optional(),
+    powerFeeds: z.array(powerFeedSchema).optional(),
     devices: z.array(deviceSchema),
     cables: z.array(cableSchema),
     networks: z.array(networkSchema),
@@ -148,3 +197,8 @@ export type Cable = z.infer<typeof cableSchema>;
 export type Network = z.infer<typeof networkSchema>;
 export type Address = z.infer<typeof addressSchema>;
 export type Position = z.infer<typeof positionSchema>;
+export type Site = z.infer<typeof siteSchema>;
+export type Rack = z.infer<typeof rackSchema>;
+export type PowerFeed = z.infer<typeof powerFeedSchema>;
+export type Placement = z.infer<typeof placementSchema>;
+export type Psu = z.infer<typeof psuSchema>;

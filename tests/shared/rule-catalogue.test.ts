@@ -60,6 +60,13 @@ function everyMistake(): Topology {
   d.media('k2', 'cat6', 80); // past 55 m (IEEE 802.3an)
   d.media('k5', 'cat6a'); // no length
   d.port('h3.c1.1').address = { mode: 'dhcp' };
+  // The room: rack r1 in row A; r2 200 racks along row B, 200 × 600 mm + 1200 mm away (site defaults).
+  d.rack('r1', { row: 'A', position: 1 }).rack('r2', { row: 'B', position: 200 });
+  d.place('h1', 'r1', 10).place('h2', 'r1', 10); // both in unit 10
+  d.place('h3', 'r1', 42, 2); // units 42–43 of a 42U rack
+  d.place('fa', 'r2', 40).place('v', 'r2', 20).place('sh', 'r1', 40);
+  // k2 (h1 → fa, 80 m of Category 6): shorter than the ~121 m estimate.
+  // k5 (v.b.1 → sh, Category 6A, no length): ~121 m estimate, past 10GBASE-T's 100 m (IEEE 802.3an).
   return d.build();
 }
 
@@ -73,7 +80,7 @@ function everyFinding(): { doc: Topology; finding: Finding }[] {
 }
 
 function idsOf(doc: Topology): Set<string> {
-  const ids = new Set<string>([...doc.cables.map((c) => c.id), ...doc.networks.map((n) => n.id)]);
+  const ids = new Set<string>([...doc.cables.map((c) => c.id), ...doc.networks.map((n) => n.id), ...(doc.racks ?? []).map((r) => r.id)]);
   for (const d of doc.devices) {
     ids.add(d.id);
     const groups = d.kind === 'array' ? d.controllers : d.kind === 'host' ? d.adapters : [d];

@@ -52,7 +52,7 @@ describe('names and labels of a validated document', () => {
     doc.name = 'Harbor\u202e Road';
     for (const device of doc.devices) {
       device.name = `\u2066${device.name}\u0000`;
-      device.rack = 'A\u000701';
+      for (const psu of device.psus ?? []) psu.name = `${psu.name}\u202e`;
       const groups = device.kind === 'switch' ? [] : device.kind === 'array' ? device.controllers : device.adapters;
       for (const group of groups) group.name = `${group.name}\u200f`;
       const ports = device.kind === 'switch' ? device.ports : groups.flatMap((g) => g.ports);
@@ -60,6 +60,10 @@ describe('names and labels of a validated document', () => {
     }
     for (const cable of doc.cables) cable.label = `${cable.label}\u202e`;
     for (const network of doc.networks) network.name = `${network.name}\n`;
+    for (const rack of doc.racks ?? []) {
+      rack.name = `A\u0007${rack.name.slice(1)}`;
+      rack.row = `\u202e${rack.row ?? ''}`;
+    }
     return doc;
   }
 
@@ -70,13 +74,14 @@ describe('names and labels of a validated document', () => {
     const clean = harborRoadV2();
     expect(checked.doc.name).toBe('Harbor Road');
     expect(checked.doc.devices.map((d) => d.name)).toEqual(clean.devices.map((d) => d.name));
-    expect(checked.doc.devices.every((d) => d.rack === 'A01')).toBe(true);
+    expect(checked.doc.racks?.map((r) => [r.name, r.row])).toEqual(clean.racks?.map((r) => [r.name, r.row ?? '']));
+    expect(checked.doc.racks?.length).toBeGreaterThan(0);
     expect(checked.doc.cables.map((c) => c.label)).toEqual(clean.cables.map((c) => c.label));
     expect(checked.doc.networks.map((n) => n.name)).toEqual(clean.networks.map((n) => `${n.name} `));
     expect(checked.doc.devices.map((d) => d.id)).toEqual(clean.devices.map((d) => d.id));
     const names: string[] = [];
     JSON.stringify(checked.doc, (key, value) => {
-      if ((key === 'name' || key === 'label' || key === 'rack') && typeof value === 'string') names.push(value);
+      if ((key === 'name' || key === 'label' || key === 'row') && typeof value === 'string') names.push(value);
       return value;
     });
     expect(names.length).toBeGreaterThan(100);

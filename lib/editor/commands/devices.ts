@@ -4,6 +4,7 @@ import { SWITCH_ROLES, type Device, type Position, type SwitchRole, type Topolog
 import { command } from '@/lib/editor/commands/define';
 import { deviceById, kindOf, mapGroups, mapPorts, patch, portsOf, removeCablesAt, removeLayout, replaceDevice } from '@/lib/editor/commands/doc';
 import { freeSpot } from '@/lib/editor/commands/layout';
+import { withPlacement } from '@/lib/editor/commands/placement';
 import { CommandError, commandErrorFromZod } from '@/lib/editor/errors';
 import { collectIds, nextNumberedName } from '@/lib/editor/ids';
 import { buildDevice, TEMPLATE_IDS, templateInfo, type TemplateId, type TemplateOptions } from '@/lib/editor/templates';
@@ -77,20 +78,23 @@ export type SetDeviceArgs = {
   id: string;
   /** Switches only. */
   role?: SwitchRole;
-  /** Hosts only; null removes it. */
+  /** A host's initiator name or an array's target name; null removes it. */
   iqn?: string | null;
+  /** A rack by its printed name (a new name adds the rack); null unplaces the device. */
   rack?: string | null;
+  /** The lowest unit the device fills; null unplaces the device. */
   ru?: number | null;
 };
 
 export function setDevice(doc: Topology, args: SetDeviceArgs): Topology {
   const device = deviceById(doc, args.id);
   if (args.role !== undefined && device.kind !== 'switch') throw new CommandError('wrong-kind', 'Only a switch has a role (data, management or shared).', 'role');
-  if (args.iqn !== undefined && device.kind !== 'host') throw new CommandError('wrong-kind', 'Only a host has an initiator name (IQN).', 'iqn');
+  if (args.iqn !== undefined && device.kind === 'switch') throw new CommandError('wrong-kind', 'Only a host has an initiator name and only an array a target name (IQN); a switch has neither.', 'iqn');
   // An empty IQN field means "none"; the analysis judges any other text (iqn-invalid).
   const iqn = args.iqn === undefined ? undefined : args.iqn === null || args.iqn.trim() === '' ? null : args.iqn.trim();
   const rack = args.rack === undefined ? undefined : args.rack === null || args.rack.trim() === '' ? null : args.rack.trim();
-  return replaceDevice(doc, args.id, (d) => patch(d, { role: args.role, iqn, rack, ru: args.ru }));
+  const edited = replaceDevice(doc, args.id, (d) => patch(d, { role: args.role, iqn }));
+  return withPlacement(edited, deviceById(edited, args.id), { rack, ru: args.ru });
 }
 
 export const deviceCommands = [

@@ -130,7 +130,12 @@ export function applyPattern(doc: Topology, args: ApplyPatternArgs): Topology {
   if (args.mode === 'merge') return merge(doc, args);
   const fresh = build(args.pattern, { ...args.options });
   const security = fresh.security ?? doc.security;
-  const result: Topology = { ...fresh, name: doc.name, layout: computeArrangement(fresh) };
+  // The room stays: the drawing is replaced, not the racks, feeds and distances it stands in.
+  const patternIds = collectIds(fresh);
+  const racks = doc.racks?.filter((r) => !patternIds.has(r.id));
+  const powerFeeds = doc.powerFeeds?.filter((f) => !patternIds.has(f.id));
+  const room = { ...(doc.site ? { site: doc.site } : {}), ...(racks?.length ? { racks } : {}), ...(powerFeeds?.length ? { powerFeeds } : {}) };
+  const result: Topology = { ...fresh, ...room, name: doc.name, layout: computeArrangement(fresh) };
   if (security) result.security = security;
   return result;
 }

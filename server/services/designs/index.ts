@@ -1,3 +1,4 @@
+import { createBuildSheetService } from '@/server/services/build-sheet';
 import { createDesignService } from './designs';
 import type { DesignDeps } from './deps';
 import { createReviewService } from './reviews';
@@ -11,6 +12,7 @@ export function createDesignServices(deps: DesignDeps) {
     designs: createDesignService(deps),
     versions: createVersionService(deps),
     reviews: createReviewService(deps),
+    buildSheet: createBuildSheetService(deps),
   };
 }
 

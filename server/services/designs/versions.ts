@@ -12,6 +12,7 @@ import type { Models } from '@/server/models';
 import { fail, ok, type Failure, type Result } from '@/server/services/result';
 import { writeTransaction, type DesignDeps, type Within } from './deps';
 import { toVersionDetail, toVersionSummary } from './dto';
+import { loadLabelHistory } from './labels';
 import { findVersion, loadDesignView, loadDocument, type DesignView, type VersionRecord } from './load';
 import { NO_SUCH_DESIGN, noSuchVersion } from './messages';
 import { appendVersion, latestNumber, prepareDocument, type PreparedDocument } from './write';
@@ -107,7 +108,7 @@ export function createVersionService(deps: DesignDeps) {
       // Editors see every design of their team, so one indexed lookup answers "is it theirs?".
       const own = await models.Design.findOne({ where: { id, teamId: viewer.teamId }, attributes: ['id'], transaction: within.transaction });
       if (!own) return fail('not-found', NO_SUCH_DESIGN);
-      const prepared = prepareDocument(body.document);
+      const prepared = prepareDocument(body.document, await loadLabelHistory(models, id, within.transaction));
       if (!prepared.ok) return prepared;
       return write(viewer, id, { message: body.message, prepared: prepared.value, baseVersion: body.baseVersion }, within);
     },
@@ -119,7 +120,7 @@ export function createVersionService(deps: DesignDeps) {
     async restore(viewer: User, id: number, n: number, body: RestoreBody): Promise<Result<VersionSummary>> {
       const opened = await openVersion(models, viewer, id, n);
       if (!opened.ok) return opened;
-      const prepared = prepareDocument(await storedTopology(models, opened.value.record));
+      const prepared = prepareDocument(await storedTopology(models, opened.value.record), await loadLabelHistory(models, id));
       if (!prepared.ok) throw new Error(`stored version ${n} of design ${id} no longer validates`);
       return write(viewer, id, { message: body.message, prepared: prepared.value }, {});
     },

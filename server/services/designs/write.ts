@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { Issue } from '@/shared/api/common';
 import { analyze } from '@/shared/analysis/analyze';
 import { summarize, type ReportSummary } from '@/shared/analysis/summary';
+import { assignStableLabels, NO_LABEL_HISTORY, type LabelHistory } from '@/shared/labels';
 import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import type { DesignVersionRow, Models } from '@/server/models';
@@ -16,11 +17,15 @@ export type PreparedDocument = { doc: Topology; json: string; hash: string; summ
  * into the body (`document.devices.3.ports.0.id`; `document` for the document as a whole).
  * This runs before the write transaction: the analysis depends on the document alone, and the write
  * lock should be held for the few statements that need it, not for a graph analysis.
+ *
+ * What is stored is format 2 (a format 1 body is upgraded) with stable cable labels: every cable
+ * keeps the label it had in the design's earlier versions (`labels`), a cable without one gets the
+ * next free label of the design's scheme, and no label of a removed cable goes to another one.
  */
-export function prepareDocument(input: unknown): Result<PreparedDocument> {
+export function prepareDocument(input: unknown, labels: LabelHistory = NO_LABEL_HISTORY): Result<PreparedDocument> {
   const checked = validateTopology(input);
   if (!checked.ok) return invalid(checked.issues.map(intoBody));
-  const { doc } = checked;
+  const doc = assignStableLabels(checked.doc, labels);
   let summary: ReportSummary;
   try {
     summary = summarize(analyze(doc), doc);

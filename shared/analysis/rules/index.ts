@@ -1,15 +1,17 @@
 import type { AnalysisContext } from '@/shared/analysis/context';
 import { addressingFindings } from '@/shared/analysis/rules/addressing';
 import { cablingFindings } from '@/shared/analysis/rules/cabling';
+import { lengthFindings } from '@/shared/analysis/rules/lengths';
 import { namingFindings } from '@/shared/analysis/rules/naming';
 import { networkFindings } from '@/shared/analysis/rules/networks';
+import { rackFindings } from '@/shared/analysis/rules/racks';
 import { separationFindings } from '@/shared/analysis/rules/separation';
 import type { Finding } from '@/shared/analysis/types';
 
 /** The design-rule groups that read the document itself (redundancy findings read hosts[] instead). */
 export type RuleGroup = (ctx: AnalysisContext) => Finding[];
 
-export const RULE_GROUPS: RuleGroup[] = [separationFindings, networkFindings, addressingFindings, cablingFindings, namingFindings];
+export const RULE_GROUPS: RuleGroup[] = [separationFindings, networkFindings, addressingFindings, cablingFindings, namingFindings, rackFindings, lengthFindings];
 
 /** Every rule id the analysis can report, with its severity — for filters and legends in the UI. */
 export const RULES = {
@@ -43,6 +45,10 @@ export const RULES = {
   'iqn-duplicate': 'error',
   'iqn-missing': 'info',
   'chap-off': 'warning',
+  'rack-units-overlap': 'error',
+  'device-above-rack-top': 'error',
+  'cable-shorter-than-estimate': 'warning',
+  'cable-estimate-beyond-reach': 'warning',
 } as const;
 
 export type RuleId = keyof typeof RULES;

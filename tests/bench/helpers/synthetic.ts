@@ -1,3 +1,4 @@
+import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
 import type { Cable, Device, Network, Port, Topology } from '@/shared/topology/schema';
 
 /**
@@ -69,5 +70,5 @@ export function syntheticDesign(hostCount: number): Topology {
     cable(`${id}.card-1.p1`, switchPort(`edge-a-${edge}`));
     if (h % SINGLE_HOMED_EVERY !== SINGLE_HOMED_EVERY - 1) cable(`${id}.card-2.p1`, switchPort(`edge-b-${edge}`));
   }
-  return { format: 'cablewright.topology/1', name: `synthetic ${hostCount}`, devices, cables, networks, security: { chap: 'mutual' } };
+  return { format: TOPOLOGY_FORMAT, name: `synthetic ${hostCount}`, devices, cables, networks, security: { chap: 'mutual' } };
 }

@@ -93,15 +93,28 @@ describe('renaming and editing devices', () => {
   it('sets switch role, host IQN and rack position, and clears them with null', () => {
     let doc = apply(smallDesign(), 'setDevice', { id: 'switch-1', role: 'shared', rack: 'R2', ru: 40 });
     doc = apply(doc, 'setDevice', { id: 'host-1', iqn: 'iqn.2026-01.example.tidewater:host-1' }); // RFC 7143 §4.2.7.2 iqn. form
-    expect(device(doc, 'switch-1')).toMatchObject({ role: 'shared', rack: 'R2', ru: 40 });
+    // A rack name nobody has used yet adds the rack (42U, the format's default height).
+    expect(doc.racks).toEqual([{ id: 'rk-r2', name: 'R2', heightU: 42 }]);
+    expect(device(doc, 'switch-1')).toMatchObject({ role: 'shared', placement: { rackId: 'rk-r2', ru: 40 } });
     expect(device(doc, 'host-1')).toMatchObject({ iqn: 'iqn.2026-01.example.tidewater:host-1' });
     doc = apply(doc, 'setDevice', { id: 'switch-1', rack: null, ru: null });
     doc = apply(doc, 'setDevice', { id: 'host-1', iqn: '' });
-    expect('rack' in device(doc, 'switch-1') || 'ru' in device(doc, 'switch-1')).toBe(false);
+    expect('placement' in device(doc, 'switch-1')).toBe(false);
     expect('iqn' in device(doc, 'host-1')).toBe(false);
+    expect(doc.racks).toHaveLength(1); // the rack stays in the room when it is emptied
   });
 
-  it('refuses a role on a host and an IQN on a switch', () => {
+  it('puts a device into the lowest free units of a rack chosen by name, and moves it by unit', () => {
+    let doc = apply(smallDesign(), 'setDevice', { id: 'switch-1', rack: 'A01', ru: 1 });
+    doc = apply(doc, 'setDevice', { id: 'host-1', rack: 'A01' });
+    expect(device(doc, 'host-1').placement).toEqual({ rackId: 'rk-a01', ru: 2 }); // unit 1 is the switch's
+    doc = apply(doc, 'setDevice', { id: 'host-1', ru: 30 });
+    expect(device(doc, 'host-1').placement).toEqual({ rackId: 'rk-a01', ru: 30 });
+    expect(doc.racks).toHaveLength(1);
+  });
+
+  it('refuses a unit for a device in no rack, a role on a host and an IQN on a switch', () => {
+    expect(() => apply(smallDesign(), 'setDevice', { id: 'host-1', ru: 4 })).toThrow(/Choose a rack first/);
     expect(() => apply(smallDesign(), 'setDevice', { id: 'host-1', role: 'data' })).toThrow(/Only a switch/);
     expect(() => apply(smallDesign(), 'setDevice', { id: 'switch-1', iqn: 'iqn.x' })).toThrow(/Only a host/);
   });

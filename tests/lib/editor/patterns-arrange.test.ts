@@ -98,3 +98,15 @@ describe('auto-arrange', () => {
     expect(hostsLeftToRight.indexOf('host-1')).toBe(switchesLeftToRight.indexOf('switch-2'));
   });
 });
+
+describe('a pattern in a room', () => {
+  it('keeps the racks, feeds and site distances when it replaces the drawing', () => {
+    let doc = apply(smallDesign(), 'setDevice', { id: 'switch-1', rack: 'A01', ru: 40 });
+    doc = { ...doc, site: { rackPitchMm: 800 }, powerFeeds: [{ id: 'feed-a', name: 'Feed A' }] };
+    const replaced = apply(doc, 'applyPattern', { pattern: 'dual-fabric', mode: 'replace', options: { hosts: 2 } });
+    expect(replaced.racks).toEqual(doc.racks);
+    expect(replaced.site).toEqual({ rackPitchMm: 800 });
+    expect(replaced.powerFeeds).toEqual([{ id: 'feed-a', name: 'Feed A' }]);
+    expect(replaced.devices.some((d) => d.placement)).toBe(false);
+  });
+});

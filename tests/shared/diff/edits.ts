@@ -6,7 +6,7 @@ import type { Adapter, Controller, Device, Port, Topology } from '@/shared/topol
  * so both answers of "is this diff empty?" come up often.
  */
 export const EDIT_KINDS = [
-  'rename-device', 'remove-device', 'add-host', 'rack-ru', 'iqn', 'switch-role',
+  'rename-device', 'remove-device', 'add-host', 'rack-ru', 'rack-edit', 'iqn', 'switch-role',
   'port-speed', 'port-role', 'port-connector', 'port-network', 'port-move', 'rename-port', 'remove-card', 'rename-card',
   'address-static', 'address-dhcp', 'address-clear',
   'cable-end', 'cable-turn', 'cable-remove', 'cable-add', 'cable-media', 'cable-length', 'cable-label',
@@ -33,10 +33,11 @@ function editDevices(doc: Topology, { kind, i, j }: Edit): boolean {
     doc.devices = doc.devices.filter((d) => d !== device);
     dropCablesOn(doc, new Set(portsOf(device).map((p) => p.id)));
     if (doc.layout) delete doc.layout[device.id];
-  } else if (kind === 'rack-ru') {
-    if (j % 2) device.ru = 1 + (j % 100);
-    else device.rack = `R${j % 7}`;
-  } else if (kind === 'iqn' && device.kind === 'host') device.iqn = `iqn.2026-01.example.test:h${j}`;
+  } else if (kind === 'rack-ru') placeDevice(doc, device, j);
+  else if (kind === 'rack-edit') {
+    const rack = at(doc.racks ?? [], j);
+    if (rack) rack.position = 1 + (i % 9);
+  } else if (kind === 'iqn' && device.kind !== 'switch') device.iqn = `iqn.2026-01.example.test:h${j}`;
   else if (kind === 'switch-role' && device.kind === 'switch') device.role = (['data', 'management', 'shared'] as const)[j % 3];
   else if (kind === 'rename-card') { const g = at(groupsOf(device), j); if (g) g.name = `${g.name}+`; }
   else if (kind === 'remove-card' && device.kind === 'host') {
@@ -52,6 +53,22 @@ function editDevices(doc: Topology, { kind, i, j }: Edit): boolean {
   } else if (kind === 'reorder') doc.devices.reverse();
   else return false;
   return true;
+}
+
+/** Into rack R0…R6 (added to the room when new) at a unit, moved within its rack, or taken out. */
+function placeDevice(doc: Topology, device: Device, j: number): void {
+  if (j % 3 === 2) {
+    delete device.placement;
+    return;
+  }
+  if (j % 3 === 1 && device.placement) {
+    device.placement.ru = 1 + (j % 42);
+    return;
+  }
+  const id = `extra-rack-${j % 7}`;
+  doc.racks ??= [];
+  if (!doc.racks.some((r) => r.id === id)) doc.racks.push({ id, name: `R${j % 7}`, row: j % 2 ? 'A' : 'B', position: 1 + (j % 5) });
+  device.placement = { rackId: id, ru: 1 + (j % 42) };
 }
 
 function addHost(doc: Topology, j: number): boolean {

@@ -11,7 +11,7 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         id: 'srv-2',
         kind: 'host',
         name: 'srv-2',
-        rack: 'R2',
+        placement: { rackId: 'rk-r1', ru: 30 },
         adapters: [{ id: 'srv-2.card-1', name: 'card-1', ports: [{ id: 'srv-2.card-1.p1', name: 'p1', role: 'data', speedGbps: 25, connector: 'sfp' }] }],
       });
     });
@@ -24,7 +24,8 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         changes: [
           { field: 'name', before: null, after: 'srv-2' },
           { field: 'kind', before: null, after: 'host' },
-          { field: 'rack', before: null, after: 'R2' },
+          { field: 'rack', before: null, after: 'R1' },
+          { field: 'ru', before: null, after: 30 },
         ],
       },
     ]);
@@ -82,8 +83,7 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
     const after = edited(bay(), (doc) => {
       const array = deviceOf(doc, 'arr-1');
       array.name = 'store-2';
-      array.ru = 22;
-      delete array.rack;
+      array.placement = { rackId: 'rk-r1', ru: 22 };
       host(doc).iqn = 'iqn.2026-01.example.bay:srv-one'; // RFC 7143 §4.2.7.4 iqn. form
       const sw = deviceOf(doc, 'sw-a');
       if (sw.kind === 'switch') sw.role = 'shared';
@@ -96,7 +96,6 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
         kind: 'array',
         changes: [
           { field: 'name', before: 'store-1', after: 'store-2' },
-          { field: 'rack', before: 'R1', after: null },
           { field: 'ru', before: 20, after: 22 },
         ],
       },
@@ -202,5 +201,34 @@ describe('diff of devices, controllers and cards, ports and networks', () => {
     ]);
     expect(diff.counts).toMatchObject({ document: 2, total: 2 });
     expect(diff.empty).toBe(false);
+  });
+});
+
+describe('diff of the room (format 2)', () => {
+  it('lists a rack, a feed and the site as document changes, and a device’s rack by name', () => {
+    const after = edited(bay(), (doc) => {
+      doc.racks!.push({ id: 'rk-r2', name: 'R2', row: 'A', position: 2, heightU: 48 });
+      doc.racks![0].position = 3;
+      doc.powerFeeds = [{ id: 'feed-a', name: 'Feed A' }];
+      doc.site = { rackPitchMm: 800 };
+      deviceOf(doc, 'arr-1').placement = { rackId: 'rk-r2', ru: 20 };
+      deviceOf(doc, 'sw-a').psus = [{ id: 'sw-a.psu1', name: 'PSU 1', feedId: 'feed-a' }];
+    });
+    const diff = diffTopologies(bay(), after);
+    expect(diff.document).toEqual([
+      { field: 'site.rackPitchMm', before: 600, after: 800 }, // 600 mm: the format's default pitch
+      { field: 'rack rk-r1', before: 'R1, row A, position 1, 42U', after: 'R1, row A, position 3, 42U' },
+      { field: 'rack rk-r2', before: null, after: 'R2, row A, position 2, 48U' },
+      { field: 'power feed feed-a', before: null, after: 'Feed A' },
+    ]);
+    expect(diff.devices.changed).toEqual([
+      { id: 'arr-1', name: 'store-1', kind: 'array', changes: [{ field: 'rack', before: 'R1', after: 'R2' }] },
+      { id: 'sw-a', name: 'sw-a', kind: 'switch', changes: [{ field: 'psus', before: null, after: 'PSU 1 (Feed A)' }] },
+    ]);
+  });
+
+  it('reads an absent site as the defaults, so writing the defaults out is no change', () => {
+    const after = edited(bay(), (doc) => (doc.site = { rackPitchMm: 600, rowPitchMm: 1200, slackM: 0.5 }));
+    expect(diffTopologies(bay(), after).empty).toBe(true);
   });
 });

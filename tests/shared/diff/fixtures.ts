@@ -1,3 +1,4 @@
+import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
 import type { Topology } from '@/shared/topology/schema';
 import { iteratePorts } from '@/shared/topology';
 
@@ -22,15 +23,15 @@ export function bay(): Topology {
   const switchPorts = (sw: string) => [1, 2, 3, 4].map((n) => port(`${sw}.p${n}`));
   const cable = (id: string, a: string, b: string, lengthM: number) => ({ id, label: `BAY-${id}`, a, b, media: 'cat6a' as const, lengthM });
   return {
-    format: 'cablewright.topology/1',
+    format: TOPOLOGY_FORMAT,
     name: 'Bay storage',
+    racks: [{ id: 'rk-r1', name: 'R1', row: 'A', position: 1 }],
     devices: [
       {
         id: 'arr-1',
         kind: 'array',
         name: 'store-1',
-        rack: 'R1',
-        ru: 20,
+        placement: { rackId: 'rk-r1', ru: 20 },
         controllers: [
           { id: 'arr-1.ctl-a', name: 'ctl-a', ports: [port('arr-1.ctl-a.p1', 'net-a', '198.51.100.1'), port('arr-1.ctl-a.p2', 'net-b', '203.0.113.1')] },
           { id: 'arr-1.ctl-b', name: 'ctl-b', ports: [port('arr-1.ctl-b.p1', 'net-a', '198.51.100.2'), port('arr-1.ctl-b.p2', 'net-b', '203.0.113.2')] },

@@ -52,6 +52,9 @@ function canonical(doc: Topology): string {
   return stable({
     name: doc.name,
     chap: doc.security?.chap ?? 'none',
+    site: doc.site ?? {},
+    racks: sorted(doc.racks ?? []),
+    powerFeeds: sorted(doc.powerFeeds ?? []),
     devices: sorted(doc.devices).map(device),
     cables: sorted(doc.cables).map(({ a, b, ...rest }) => ({ ...rest, ends: [a, b].sort() })),
     networks: sorted(doc.networks),

@@ -1,4 +1,5 @@
-import type { Cable, Device, HostDevice, Media, Network, Port, SwitchDevice, Topology } from '@/shared/topology/schema';
+import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
+import type { Cable, Device, HostDevice, Media, Network, Port, Rack, SwitchDevice, Topology } from '@/shared/topology/schema';
 
 /**
  * A small builder for the named test topologies. Ids follow one readable scheme:
@@ -8,7 +9,7 @@ import type { Cable, Device, HostDevice, Media, Network, Port, SwitchDevice, Top
 type PortOptions = Partial<Pick<Port, 'role' | 'networkId' | 'address' | 'speedGbps' | 'connector'>>;
 
 export class Draft {
-  readonly doc: Topology = { format: 'cablewright.topology/1', name: 'test design', devices: [], cables: [], networks: [] };
+  readonly doc: Topology = { format: TOPOLOGY_FORMAT, name: 'test design', devices: [], cables: [], networks: [] };
   private nextSwitchPort = new Map<string, number>();
 
   private makePort(id: string, options: PortOptions = {}): Port {
@@ -63,6 +64,18 @@ export class Draft {
       })),
       ...extra,
     });
+    return this;
+  }
+
+  /** A rack of the room (format 2); 42U unless told. */
+  rack(id: string, extra: Partial<Rack> = {}): this {
+    (this.doc.racks ??= []).push({ id, name: id, ...extra });
+    return this;
+  }
+
+  /** Put a device into a rack at its lowest unit `ru` (EIA-310 units from the bottom). */
+  place(deviceId: string, rackId: string, ru: number, heightU?: number): this {
+    this.device(deviceId).placement = { rackId, ru, ...(heightU === undefined ? {} : { heightU }) };
     return this;
   }
 

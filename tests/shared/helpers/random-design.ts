@@ -1,3 +1,4 @@
+import { TOPOLOGY_FORMAT } from '@/shared/topology/schema';
 import type { Cable, Device, Network, Port, Topology } from '@/shared/topology/schema';
 
 /**
@@ -104,7 +105,7 @@ export function randomDesign(seed: number): Topology {
     used.add(b);
     cables.push({ id: `k${k}`, a, b, media: 'cat6a' });
   }
-  return { format: 'cablewright.topology/1', name: `random ${seed}`, devices, cables, networks };
+  return { format: TOPOLOGY_FORMAT, name: `random ${seed}`, devices, cables, networks };
 }
 
 function structuredCables(devices: Device[], cables: Cable[], used: Set<string>, int: (lo: number, hi: number) => number) {
