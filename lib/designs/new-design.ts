@@ -9,7 +9,7 @@ export type StartKind = 'blank' | 'pattern' | 'import';
 export type PatternId = (typeof PATTERNS)[number]['id'];
 
 export const PATTERN_HINTS: Record<PatternId, string> = {
-  'direct-attach': 'No switches: each host card is cabled straight to a controller, one subnet per controller.',
+  'direct-attach': 'No switches: each host card is cabled straight to a controller, every cable on a subnet of its own.',
   'dual-fabric': 'Two data switches, one subnet each; every host has one storage port on each, on different cards.',
   'dual-fabric-management': 'Dual fabric, plus management ports on a separate management switch and network.',
 };

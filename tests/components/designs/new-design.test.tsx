@@ -132,6 +132,17 @@ describe('new design form', () => {
     expect(issues).toHaveTextContent(/must not be empty/);
   });
 
+  it('explains an out-of-range pattern number under its field as soon as it is typed', () => {
+    renderForm();
+    fireEvent.changeText(screen.getByTestId('new-design-cards'), '5');
+    // Before anything is sent: the field says why, and no preview of a design that cannot be built.
+    expect(screen.getByTestId('new-design-cards-error')).toHaveTextContent('At most 4 cards per host');
+    expect(screen.queryByTestId('new-design-preview')).toBeNull();
+    fireEvent.changeText(screen.getByTestId('new-design-cards'), '3');
+    expect(screen.queryByTestId('new-design-cards-error')).toBeNull();
+    expect(post).not.toHaveBeenCalled();
+  });
+
   it('creates a blank design without a document', async () => {
     post.mockResolvedValueOnce({ design: { ...harborDesign, id: 9 }, version: null });
     renderForm();
