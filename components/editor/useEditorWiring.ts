@@ -14,7 +14,7 @@ const SHEET_GAP = 0.56;
 /**
  * What runs beside the editor while a design is open: the working copy kept in local storage, the
  * live analysis, the first fit of an opened design, and on a phone bringing a tapped device, card
- * or controller into the part of the canvas above the sheet, readable. Ports are left where they
+ * or controller into the part of the canvas above the sheet, readable and with ports a finger can tap. Ports are left where they
  * are: the next tap may be the other end of a cable.
  */
 export function useEditorWiring({ ready, readOnly, wide, gestures, selection }: { ready: boolean; readOnly: boolean; wide: boolean; gestures: Gestures; selection: string[] }) {
@@ -48,6 +48,7 @@ export function useEditorWiring({ ready, readOnly, wide, gestures, selection }: 
     const box = boxOf(snapshot, only);
     const screen = canvasUiStore.getState().screen;
     if (!box || screen.width === 0) return;
-    state.setViewport(revealAbove(state.viewport, box, screen, screen.height * SHEET_GAP));
+    // At zoom 1 or more a port's target is 44 px on screen (PORT_PITCH), a finger's size: its ports can be tapped.
+    state.setViewport(revealAbove(state.viewport, box, screen, screen.height * SHEET_GAP, 1));
   }, [wide, only]);
 }
