@@ -6,7 +6,7 @@ import { indexTopology, iteratePorts, type PortRef } from '@/shared/topology/ind
  * devices, grouped by device, the most fitting first. A candidate is ranked by what would be wrong
  * with the cable, each mismatch weighted by how bad it is:
  *   connector (16) — an RJ45 port and an SFP cage: no cable plugs into both
- *   path (8)       — host to host or controller to controller: no storage path runs over it
+ *   path (12)      — host to host or controller to controller: no storage path runs over it
  *   role (8)       — a data port on a management switch, a management port on a data switch, or a
  *                    data port to a management port: management and data are kept apart
  *   network (2)    — the ends are on different networks, or the switch already carries other
@@ -17,7 +17,7 @@ import { indexTopology, iteratePorts, type PortRef } from '@/shared/topology/ind
  * never doubles a cable by accident.
  */
 export type Mismatch = 'connector' | 'path' | 'role' | 'network' | 'speed';
-const WEIGHT: Record<Mismatch, number> = { connector: 16, path: 8, role: 8, network: 2, speed: 1 };
+const WEIGHT: Record<Mismatch, number> = { connector: 16, path: 12, role: 8, network: 2, speed: 1 };
 
 export type PortChoice = {
   portId: string;
