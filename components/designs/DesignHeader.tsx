@@ -1,14 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import { Button, Heading, Icon, Text, space } from '@/components/ui';
-import { StatusBadge } from '@/components/designs/StatusBadge';
+import { DesignStatus } from '@/components/designs/DesignStatus';
 import { editorHref } from '@/lib/designs/links';
-import type { DesignDto } from '@/shared/api/designs';
+import type { DesignDto, VersionSummary } from '@/shared/api/designs';
 
-type DesignHeaderProps = { design: DesignDto; editor: boolean; uploading: boolean; onUpload: () => void };
+type DesignHeaderProps = { design: DesignDto; latest: VersionSummary | null; editor: boolean; uploading: boolean; onUpload: () => void };
 
 /** The design's name, site and status, with the actions that apply to the design as a whole. */
-export function DesignHeader({ design, editor, uploading, onUpload }: DesignHeaderProps) {
+export function DesignHeader({ design, latest, editor, uploading, onUpload }: DesignHeaderProps) {
   return (
     <View style={styles.wrap}>
       <Link href="/designs" asChild>
@@ -16,7 +16,7 @@ export function DesignHeader({ design, editor, uploading, onUpload }: DesignHead
       </Link>
       <View style={styles.title}>
         <Heading level={1}>{design.name}</Heading>
-        <StatusBadge status={design.status} testID="design-status" />
+        <DesignStatus status={design.status} approvedVersion={design.approvedVersion} latest={latest && { number: latest.number, review: latest.review.state }} testID="design-status" />
       </View>
       {design.site ? <Text color="inkMuted">{design.site}</Text> : null}
       <View style={styles.actions}>

@@ -42,7 +42,7 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
 
   return (
     <Screen testID="design-screen" maxWidth={wide ? 1280 : undefined}>
-      <DesignHeader design={info} editor={editor} uploading={uploading} onUpload={() => setUploading(true)} />
+      <DesignHeader design={info} latest={versions[0] ?? null} editor={editor} uploading={uploading} onUpload={() => setUploading(true)} />
       {uploading ? (
         <UploadVersion
           designId={id}
