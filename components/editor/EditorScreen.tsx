@@ -65,7 +65,7 @@ export function EditorScreen({ designId }: { designId: number }) {
     if (ready && paletteOpen === null) setPaletteOpen(editorStore.getState().doc.devices.length === 0);
   }, [ready, paletteOpen]);
 
-  useEditorWiring({ ready, readOnly, wide, gestures, selection });
+  useEditorWiring({ ready, shown: ready || session.state.status === 'restore', readOnly, wide, gestures, selection });
 
   const guard = useLeaveGuard(ready && dirty && !readOnly);
   const leave = useCallback((href: string) => router.push(href as Href), []);

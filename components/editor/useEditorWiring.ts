@@ -13,11 +13,11 @@ const SHEET_GAP = 0.56;
 
 /**
  * What runs beside the editor while a design is open: the working copy kept in local storage, the
- * live analysis, the first fit of an opened design, and on a phone bringing a tapped device, card
+ * live analysis, the first fit of an opened design (also of the saved version drawn behind the restore question), and on a phone bringing a tapped device, card
  * or controller into the part of the canvas above the sheet, readable and with ports a finger can tap. Ports are left where they
  * are: the next tap may be the other end of a cable.
  */
-export function useEditorWiring({ ready, readOnly, wide, gestures, selection }: { ready: boolean; readOnly: boolean; wide: boolean; gestures: Gestures; selection: string[] }) {
+export function useEditorWiring({ ready, shown, readOnly, wide, gestures, selection }: { ready: boolean; shown: boolean; readOnly: boolean; wide: boolean; gestures: Gestures; selection: string[] }) {
   useEffect(() => {
     if (!ready) return;
     const storage = defaultStorage();
@@ -33,11 +33,11 @@ export function useEditorWiring({ ready, readOnly, wide, gestures, selection }: 
   const screenWidth = useStore(canvasUiStore, (s) => s.screen.width);
   useEffect(() => {
     const session = editorStore.getState().session;
-    if (ready && screenWidth > 0 && fitted.current !== session) {
+    if (shown && screenWidth > 0 && fitted.current !== session) {
       fitted.current = session;
       gestures.fit();
     }
-  }, [ready, screenWidth, gestures]);
+  }, [ready, shown, screenWidth, gestures]);
 
   const only = selection.length === 1 ? selection[0] : null;
   useEffect(() => {
