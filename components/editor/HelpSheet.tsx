@@ -50,7 +50,7 @@ export function HelpSheet({ wide, onClose }: { wide: boolean; onClose: () => voi
       )}
       <Text variant="bodyStrong">On the canvas</Text>
       <Text variant="small">
-        Cables: solid lines are twisted-pair copper (wider for a better category), long dashes multimode fibre, a heavy short-dashed line direct-attach copper, dash-dot active optical. The letter on a cable is its fabric. A dashed, hatched outline with a warning triangle marks a single point of failure; a host’s badge counts its sessions, with a check when it has no single point of failure.
+        Cables: solid lines are twisted-pair copper (wider for a better category), long dashes multimode fibre, a heavy short-dashed line direct-attach copper, dash-dot active optical. A cable’s tag gives its fabric letter and medium (“A · 6A” is fabric A on Category 6A, “B · 6” fabric B on Category 6); the tag button beside the zoom shows the printed labels instead. A dashed, hatched outline with a warning triangle marks a single point of failure; a host’s badge counts its sessions, with a check when it has no single point of failure.
       </Text>
     </Overlay>
   );

@@ -1,5 +1,6 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Point, Rect } from '@/lib/editor/shape';
+import type { CableTagMode } from '@/lib/editor/drawing';
 import type { Size } from '@/lib/editor/viewport';
 
 /**
@@ -28,6 +29,8 @@ export type CanvasUiState = {
   connectFrom: string | null;
   /** The cable just made, confirmed in a short notice with undo. */
   notice: CableNotice | null;
+  /** What cable tags say: fabric and medium, or the printed label. */
+  cableTags: CableTagMode;
   /** A pointer is down or a pinch is on: the live analysis waits. */
   busy: boolean;
   screen: Size;
@@ -39,7 +42,7 @@ export type CableNotice = { cableId: string; text: string; doc: unknown };
 export type CanvasUiStore = StoreApi<CanvasUiState>;
 
 export function createCanvasUiStore(): CanvasUiStore {
-  return createStore<CanvasUiState>()(() => ({ drag: null, marquee: null, pointer: null, chooser: null, portList: null, connectFrom: null, notice: null, busy: false, screen: { width: 0, height: 0 } }));
+  return createStore<CanvasUiState>()(() => ({ drag: null, marquee: null, pointer: null, chooser: null, portList: null, connectFrom: null, notice: null, cableTags: 'fabric', busy: false, screen: { width: 0, height: 0 } }));
 }
 
 export const canvasUiStore = createCanvasUiStore();

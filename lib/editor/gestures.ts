@@ -4,7 +4,7 @@ import { devicesInRect, hitTest, portsTooSmallToTap, type Hit } from '@/lib/edit
 import { cableNow } from '@/lib/editor/quick-cable';
 import type { Point } from '@/lib/editor/shape';
 import { editorStore, type EditorStore } from '@/lib/editor/store';
-import { fitToBounds, panBy, screenToWorld, snapToGrid, zoomAbout, zoomBy } from '@/lib/editor/viewport';
+import { FIT_MAX_ZOOM, fitPadding, fitToBounds, panBy, screenToWorld, snapToGrid, zoomAbout, zoomBy } from '@/lib/editor/viewport';
 
 /**
  * What pointers do on the canvas, without any DOM: the canvas feeds screen points (CSS px from
@@ -244,7 +244,7 @@ export function createGestures(options: GestureOptions = {}) {
 
   function fit() {
     const screen = ui.getState().screen;
-    editor().setViewport(fitToBounds(snapshot().bounds, screen, 40, 1));
+    editor().setViewport(fitToBounds(snapshot().bounds, screen, fitPadding(screen), FIT_MAX_ZOOM));
   }
 
   return { down, move, up, cancel, wheel, zoomStep, fit, get mode() { return mode.kind; } };
