@@ -89,7 +89,7 @@ const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; d
             <View key={i} style={styles.status}>
               <Icon name={f.severity === 'error' ? 'error' : 'warning'} size={18} color={f.severity === 'error' ? 'dangerText' : 'warningText'} />
               <Text variant="small" color={f.severity === 'error' ? 'dangerText' : 'warningText'} style={styles.statusText}>
-                <Text variant="smallStrong" color={f.severity === 'error' ? 'dangerText' : 'warningText'}>{`${PROBLEM_WORDS[f.rule] ?? f.rule}: `}</Text>
+                <Text variant="smallStrong" color={f.severity === 'error' ? 'dangerText' : 'warningText'}>{`${PROBLEM_WORDS.get(f.rule) ?? f.rule}: `}</Text>
                 {f.message}
               </Text>
             </View>
