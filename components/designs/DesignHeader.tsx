@@ -30,7 +30,7 @@ export function DesignHeader({ design, latest, editor, uploading, onUpload }: De
             <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
           </Link>
         )}
-        {editor && !uploading ? (
+        {editor && !uploading && latest ? (
           <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
         ) : null}
       </View>

@@ -58,6 +58,22 @@ describe('design screen', () => {
     expect(status).toHaveTextContent('Approved v3·draft v4');
   });
 
+  it('offers a blank design’s editor first, and a file second', async () => {
+    dimensions.mockReturnValue({ width: 390, height: 844, scale: 1, fontScale: 1 });
+    get.mockImplementation(async (path: string) => {
+      if (path === '/api/designs/1') return designResponse([], { status: 'draft', approvedVersion: null });
+      throw new Error(`unexpected request ${path}`);
+    });
+    renderWithClient(<DesignScreen id={1} selected={null} onSelect={jest.fn()} />, { user: people.designer });
+    const empty = await screen.findByTestId('design-no-versions');
+    expect(empty).toHaveTextContent(/^No versions yetDraw this design on the canvas/);
+    const actions = within(empty).getAllByRole('button').map((b) => b.props.testID);
+    expect(actions).toEqual(['design-no-versions-edit', 'design-no-versions-upload']);
+    expect(screen.getByTestId('design-status').props['aria-label']).toBe('Draft');
+    fireEvent.press(screen.getByTestId('design-no-versions-upload'));
+    expect(await screen.findByTestId('upload-file-pick')).toBeOnTheScreen();
+  });
+
   it('opens the picked version in the detail panel with its review thread', async () => {
     const onSelect = renderDesign(people.reviewer, 1440, 1);
     expect(await screen.findByTestId('version-panel')).toHaveTextContent(/Version 1/);
