@@ -110,6 +110,7 @@ export function EditorScreen({ designId }: { designId: number }) {
         onAdd={() => (wide ? setPaletteOpen(!paletteOpen) : setPhoneSheet('add'))}
         paletteOpen={wide && !!paletteOpen}
         onFindings={() => setPhoneSheet('findings')}
+        approvedVersion={session.design?.design.approvedVersion?.number ?? null}
       />
       {view === 'networks' ? (
         <NetworksScreen wide={wide} />
