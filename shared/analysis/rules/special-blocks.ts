@@ -36,7 +36,7 @@ export function classifyBlock(block: Cidr): Verdict | null {
 function finding(network: Network, verdict: Verdict): Finding {
   const name = displayName(network);
   const entry = verdict.entry;
-  const where = `${name} (${network.cidr})`;
+  const where = `The network ${name} (${network.cidr})`;
   switch (verdict.use) {
     case 'unusable':
       return {
