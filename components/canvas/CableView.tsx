@@ -30,6 +30,7 @@ export const CableView = memo(function CableView({ line, fabric, selected, spof,
   const style = cableStyle(line.source.media);
   const ink = fabric?.ink ?? INK.lineStrong;
   const mid = midpoint(line.a, line.b);
+  const tag = cableTagText(tags, line.source, fabric?.tag ?? null);
   const label = `cable ${line.source.label ?? line.id}, ${style.label}${fabric ? `, fabric ${fabric.tag}` : ''}${spof ? ', single point of failure' : ''}`;
   return (
     <G testID={`cable-${line.id}`} aria-label={label} aria-selected={selected}>
@@ -37,8 +38,8 @@ export const CableView = memo(function CableView({ line, fabric, selected, spof,
       {spof ? <Line testID={`spof-mark-${line.id}`} x1={line.a.x} y1={line.a.y} x2={line.b.x} y2={line.b.y} stroke={INK.danger} strokeOpacity={0.55} strokeWidth={style.width + 6} strokeDasharray={SPOF_DASH} /> : null}
       <Line x1={line.a.x} y1={line.a.y} x2={line.b.x} y2={line.b.y} stroke={selected ? INK.copper : ink} strokeWidth={style.width} strokeDasharray={style.dash ?? undefined} />
       {detail ? (
-        <G transform={`translate(${mid.x} ${mid.y})`} testID={`cable-tag-${line.id}`}>
-          <CableTagMark tag={cableTagText(tags, line.source, fabric?.tag ?? null)} ink={ink} />
+        <G transform={`translate(${mid.x} ${mid.y})`} testID={`cable-tag-${line.id}`} aria-label={`tag ${tag}`}>
+          <CableTagMark tag={tag} ink={ink} />
         </G>
       ) : null}
       {spof ? <SpofMarker x={mid.x + 14} y={mid.y - 22} /> : null}
