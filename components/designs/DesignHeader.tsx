@@ -19,21 +19,24 @@ export function DesignHeader({ design, latest, editor, uploading, onUpload }: De
         <DesignStatus status={design.status} approvedVersion={design.approvedVersion} latest={latest && { number: latest.number, review: latest.review.state }} testID="design-status" />
       </View>
       {design.site ? <Text color="inkMuted">{design.site}</Text> : null}
-      <View style={styles.actions}>
-        {editor ? (
-          <Link href={editorHref(design.id)} asChild>
-            <Button label="Open in editor" testID="design-edit" />
-          </Link>
-        ) : (
-          // Roles that may not edit see the newest version they may read on the canvas, read-only.
-          <Link href={editorHref(design.id)} asChild>
-            <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
-          </Link>
-        )}
-        {editor && !uploading && latest ? (
-          <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
-        ) : null}
-      </View>
+      {latest ? (
+        // A blank design offers its editor in the empty state below instead, first of its two ways to start.
+        <View style={styles.actions}>
+          {editor ? (
+            <Link href={editorHref(design.id)} asChild>
+              <Button label="Open in editor" testID="design-edit" />
+            </Link>
+          ) : (
+            // Roles that may not edit see the newest version they may read on the canvas, read-only.
+            <Link href={editorHref(design.id)} asChild>
+              <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
+            </Link>
+          )}
+          {editor && !uploading ? (
+            <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
+          ) : null}
+        </View>
+      ) : null}
     </View>
   );
 }

@@ -70,6 +70,7 @@ describe('design screen', () => {
     const actions = within(empty).getAllByRole('button').map((b) => b.props.testID);
     expect(actions).toEqual(['design-no-versions-edit', 'design-no-versions-upload']);
     expect(screen.getByTestId('design-status').props['aria-label']).toBe('Draft');
+    expect(screen.queryByTestId('design-edit')).toBeNull(); // offered once, in the empty state
     fireEvent.press(screen.getByTestId('design-no-versions-upload'));
     expect(await screen.findByTestId('upload-file-pick')).toBeOnTheScreen();
   });
