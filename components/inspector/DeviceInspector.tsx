@@ -31,10 +31,11 @@ type Props = { device: Device; doc: Topology; readOnly: boolean };
 export function DeviceInspector({ device, doc, readOnly }: Props) {
   const iqnNote = device.kind === 'host' ? iqnSuggestion(doc, device) : null;
   const iqnFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'iqn-invalid')?.message ?? null);
+  const nameFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'device-name-duplicate')?.message ?? null);
   const groups = groupsOf(device);
   return (
     <View style={styles.wrap} testID="inspector-device">
-      <CommitField label="Name" value={device.name} schema={nameField} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renameDevice', { id: device.id, name })} />
+      <CommitField label="Name" value={device.name} schema={nameField} note={nameFinding} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renameDevice', { id: device.id, name })} />
       {device.kind === 'switch' ? (
         <ChipPicker<SwitchRole>
           label="Carries"
