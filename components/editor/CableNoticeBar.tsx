@@ -6,7 +6,7 @@ import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { openNoticedCable, undoNoticedCable } from '@/lib/editor/quick-cable';
 
 /** How long the notice stays: long enough to read and reach Undo (common practice for such notices). */
-const SHOWN_MS = 8000;
+const SHOWN_MS = 12000;
 
 /**
  * The notice of a cable just made: one short bar at the top of the canvas, with Undo and the
