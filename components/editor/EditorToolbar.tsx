@@ -46,7 +46,8 @@ function Status({ approved }: { approved: number | null }) {
   const readOnly = useReadOnly();
   const base = useBaseVersion();
   const counts = useStore(liveAnalysisStore, (s) => (s.report ? findingCounts(s.report.findings) : null));
-  const version = versionWords(base, approved);
+  // While unsaved the line is about the work in progress; the approval is told once it is saved or read.
+  const version = versionWords(base, dirty && !readOnly ? null : approved);
   const state = readOnly ? `Read-only · ${version}` : dirty ? (base === null ? 'Unsaved · no version yet' : `Unsaved · on ${version}`) : base === null ? 'No version saved yet' : `Saved · ${version}`;
   return (
     <Text variant="caption" color={dirty && !readOnly ? 'copper' : 'inkMuted'} numberOfLines={1} testID="editor-status">
