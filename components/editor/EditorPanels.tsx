@@ -75,6 +75,11 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
       </BottomSheet>
     );
   }
+  // Closing the list lets go of its device too, so no settings sheet takes its place.
+  const closePortList = () => {
+    canvasUiStore.setState({ portList: null });
+    if (!editorStore.getState().pendingCableStart) editorStore.getState().clearSelection();
+  };
   if (connectFrom) {
     return (
       <BottomSheet title="Connect to…" expanded onToggle={toggle} onClose={() => canvasUiStore.setState({ connectFrom: null })} testID="sheet-connect">
@@ -84,7 +89,7 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
   }
   if (portList) {
     return (
-      <BottomSheet title={`Ports of ${subjectLabel(doc, portList.deviceId)}`} expanded={expanded} onToggle={toggle} onClose={() => canvasUiStore.setState({ portList: null })} testID="sheet-ports">
+      <BottomSheet title={`Ports of ${subjectLabel(doc, portList.deviceId)}`} expanded={expanded} onToggle={toggle} onClose={closePortList} testID="sheet-ports">
         <DevicePortList deviceId={portList.deviceId} />
       </BottomSheet>
     );

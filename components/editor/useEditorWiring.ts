@@ -42,6 +42,8 @@ export function useEditorWiring({ ready, shown, readOnly, wide, gestures, select
   const only = selection.length === 1 ? selection[0] : null;
   useEffect(() => {
     if (wide || !only) return;
+    // A device whose port list is open stays where it is: the list is the precise way in.
+    if (canvasUiStore.getState().portList?.deviceId === only) return;
     const state = editorStore.getState();
     const snapshot = buildSnapshot(state.doc);
     if (!snapshot.devices.has(only) && snapshot.parts.get(only)?.kind !== 'group') return;

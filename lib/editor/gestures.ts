@@ -151,13 +151,14 @@ export function createGestures(options: GestureOptions = {}) {
   }
 
   /**
-   * A touch on a port or card whose ports are too small for a finger: the device's port list. The
-   * view stays as it is (no selection to bring into view), so the other end is still on screen.
+   * A touch on a port or card whose ports are too small for a finger: the device is selected (unless
+   * a cable is being drawn from another one) and its ports are listed. The view stays as it is, so
+   * the other end of a cable is still on screen.
    */
   function offerPorts(deviceId: string): void {
     const state = editor();
-    if (!state.pendingCableStart) state.clearSelection();
     ui.setState({ portList: { deviceId }, pointer: null });
+    if (!state.pendingCableStart) state.select([deviceId]);
   }
 
   function tapPort(hit: Extract<Hit, { kind: 'port' }>, additive: boolean) {

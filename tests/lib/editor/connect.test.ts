@@ -76,12 +76,12 @@ describe('touch targets on the canvas', () => {
     expect(portsTooSmallToTap(0.99)).toBe(true);
   });
 
-  it('opens the device’s port list for a touch on a port too small to aim at, and guesses nothing', () => {
+  it('selects the device and opens its port list for a touch on a port too small to aim at, and guesses nothing', () => {
     const { store, ui, touch } = phone(0.3);
     touch('cam-rec-2.card-2.p1');
     expect(ui.getState().portList).toEqual({ deviceId: 'cam-rec-2' });
     expect(store.getState().pendingCableStart).toBeNull();
-    expect(store.getState().selection).toEqual([]);
+    expect(store.getState().selection).toEqual(['cam-rec-2']); // the device, not a guessed port
   });
 
   it('starts a cable from a port a finger can hit, and makes it at the second, with a notice', () => {
