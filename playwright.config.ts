@@ -41,7 +41,7 @@ export default defineConfig({
     // The canvas specs are written for one window size each (canvas-phone, canvas-wide), so they run in their own project only.
     { name: 'phone', testIgnore: '**/canvas-*.spec.ts', use: { browserName: 'chromium', viewport: { width: 390, height: 844 }, hasTouch: true } },
     { name: 'wide', testIgnore: '**/canvas-*.spec.ts', use: { browserName: 'chromium', viewport: { width: 1440, height: 900 } } },
-    { name: 'canvas-phone', testMatch: '**/canvas-phone.spec.ts', use: { browserName: 'chromium', viewport: { width: 390, height: 844 }, hasTouch: true } },
+    { name: 'canvas-phone', testMatch: '**/canvas-phone*.spec.ts', use: { browserName: 'chromium', viewport: { width: 390, height: 844 }, hasTouch: true } },
     { name: 'canvas-wide', testMatch: '**/canvas-wide.spec.ts', use: { browserName: 'chromium', viewport: { width: 1440, height: 900 } } },
   ],
   webServer: {

@@ -45,6 +45,7 @@ function partsByDevice(snapshot: Snapshot, selection: string[]): Map<string, str
 export function CanvasScene({ width, height, label }: { width: number; height: number; label: string }) {
   const snapshot = useCanvasSnapshot();
   const drag = useStore(canvasUiStore, (s) => s.drag);
+  const tags = useStore(canvasUiStore, (s) => s.cableTags);
   const viewport = useViewport();
   const selection = useSelection();
   const pending = usePendingCableStart();
@@ -78,7 +79,7 @@ export function CanvasScene({ width, height, label }: { width: number; height: n
       <Rect width={width} height={height} fill={INK.paper} />
       <G transform={transform}>
         {zoom >= 0.4 ? <Rect x={world.x} y={world.y} width={world.width} height={world.height} fill="url(#cw-grid)" /> : null}
-        <CableLayer cables={drawn.cables} fabrics={fabrics} selection={selectionSet} marks={marks} detail={detail} />
+        <CableLayer cables={drawn.cables} fabrics={fabrics} selection={selectionSet} marks={marks} detail={detail} tags={tags} />
         <DeviceLayer devices={drawn.devices} detail={detail} fabrics={fabrics} selection={selectionSet} partsByDevice={parts} cabledByDevice={cabled} pendingPort={pending} pendingDevice={pendingDevice} marks={marks} />
         <RubberBand snapshot={shown} pendingPort={pending} zoom={zoom} />
         <Marquee zoom={zoom} />

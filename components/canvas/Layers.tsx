@@ -1,4 +1,5 @@
 import { memo } from 'react';
+import type { CableTagMode } from '@/lib/editor/drawing';
 import type { Fabrics } from '@/lib/editor/fabrics';
 import { NO_MARKS, type CanvasMarks } from '@/lib/editor/marks';
 import type { Snapshot } from '@/lib/editor/snapshot';
@@ -9,12 +10,12 @@ import { DeviceNode } from '@/components/canvas/DeviceNode';
  * The two layers of the drawing, cables under devices. Each maps over its items and passes
  * value-comparable props, so only items whose box, line, selection or marks changed re-render.
  */
-type CableLayerProps = { cables: Snapshot['cables']; fabrics: Fabrics; selection: ReadonlySet<string>; marks: CanvasMarks; detail: boolean };
+type CableLayerProps = { cables: Snapshot['cables']; fabrics: Fabrics; selection: ReadonlySet<string>; marks: CanvasMarks; detail: boolean; tags: CableTagMode };
 
-export const CableLayer = memo(function CableLayer({ cables, fabrics, selection, marks, detail }: CableLayerProps) {
+export const CableLayer = memo(function CableLayer({ cables, fabrics, selection, marks, detail, tags }: CableLayerProps) {
   const out = [];
   for (const line of cables.values()) {
-    out.push(<CableView key={line.id} line={line} fabric={fabrics.byCable.get(line.id) ?? null} selected={selection.has(line.id)} spof={marks.spofCables.has(line.id)} detail={detail} />);
+    out.push(<CableView key={line.id} line={line} fabric={fabrics.byCable.get(line.id) ?? null} selected={selection.has(line.id)} spof={marks.spofCables.has(line.id)} detail={detail} tags={tags} />);
   }
   return <>{out}</>;
 });

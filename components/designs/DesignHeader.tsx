@@ -1,14 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import { Button, Heading, Icon, Text, space } from '@/components/ui';
-import { StatusBadge } from '@/components/designs/StatusBadge';
+import { DesignStatus } from '@/components/designs/DesignStatus';
 import { editorHref } from '@/lib/designs/links';
-import type { DesignDto } from '@/shared/api/designs';
+import type { DesignDto, VersionSummary } from '@/shared/api/designs';
 
-type DesignHeaderProps = { design: DesignDto; editor: boolean; uploading: boolean; onUpload: () => void };
+type DesignHeaderProps = { design: DesignDto; latest: VersionSummary | null; editor: boolean; uploading: boolean; onUpload: () => void };
 
 /** The design's name, site and status, with the actions that apply to the design as a whole. */
-export function DesignHeader({ design, editor, uploading, onUpload }: DesignHeaderProps) {
+export function DesignHeader({ design, latest, editor, uploading, onUpload }: DesignHeaderProps) {
   return (
     <View style={styles.wrap}>
       <Link href="/designs" asChild>
@@ -16,24 +16,27 @@ export function DesignHeader({ design, editor, uploading, onUpload }: DesignHead
       </Link>
       <View style={styles.title}>
         <Heading level={1}>{design.name}</Heading>
-        <StatusBadge status={design.status} testID="design-status" />
+        <DesignStatus status={design.status} approvedVersion={design.approvedVersion} latest={latest && { number: latest.number, review: latest.review.state }} testID="design-status" />
       </View>
       {design.site ? <Text color="inkMuted">{design.site}</Text> : null}
-      <View style={styles.actions}>
-        {editor ? (
-          <Link href={editorHref(design.id)} asChild>
-            <Button label="Open in editor" testID="design-edit" />
-          </Link>
-        ) : (
-          // Roles that may not edit see the newest version they may read on the canvas, read-only.
-          <Link href={editorHref(design.id)} asChild>
-            <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
-          </Link>
-        )}
-        {editor && !uploading ? (
-          <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
-        ) : null}
-      </View>
+      {latest ? (
+        // A blank design offers its editor in the empty state below instead, first of its two ways to start.
+        <View style={styles.actions}>
+          {editor ? (
+            <Link href={editorHref(design.id)} asChild>
+              <Button label="Open in editor" testID="design-edit" />
+            </Link>
+          ) : (
+            // Roles that may not edit see the newest version they may read on the canvas, read-only.
+            <Link href={editorHref(design.id)} asChild>
+              <Button label="View on canvas" variant="secondary" testID="design-view-canvas" />
+            </Link>
+          )}
+          {editor && !uploading ? (
+            <Button label="Upload a document as a new version" variant="secondary" icon={<Icon name="upload" size={18} color="primary" />} onPress={onUpload} testID="design-upload" />
+          ) : null}
+        </View>
+      ) : null}
     </View>
   );
 }

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Icon, Text, colors, radius, space } from '@/components/ui';
 import { LinkRow } from '@/components/designs/LinkRow';
-import { StatusBadge } from '@/components/designs/StatusBadge';
+import { DesignStatus } from '@/components/designs/DesignStatus';
 import { SummaryLine } from '@/components/designs/SummaryLine';
 import { designHref } from '@/lib/designs/links';
 import { formatDateTime } from '@/lib/format';
@@ -25,7 +25,7 @@ export function DesignList({ designs }: { designs: readonly DesignListItem[] }) 
                 </View>
                 <Icon name="chevron" size={20} color="inkMuted" />
               </View>
-              <StatusBadge status={design.status} testID={`design-${design.id}-status`} />
+              <DesignStatus status={design.status} approvedVersion={design.approvedVersion} latest={design.latestVersion} testID={`design-${design.id}-status`} />
               <LatestLine design={design} />
           </LinkRow>
         </View>

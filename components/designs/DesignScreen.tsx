@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import { Card, EmptyState, Screen, WIDE_BREAKPOINT, space } from '@/components/ui';
+import { Link } from 'expo-router';
+import { Button, Card, EmptyState, Screen, WIDE_BREAKPOINT, space } from '@/components/ui';
+import { editorHref } from '@/lib/designs/links';
 import { DesignHeader } from '@/components/designs/DesignHeader';
 import { QueryStatus } from '@/components/designs/QueryStatus';
 import { UploadVersion } from '@/components/versions/UploadVersion';
@@ -42,7 +44,7 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
 
   return (
     <Screen testID="design-screen" maxWidth={wide ? 1280 : undefined}>
-      <DesignHeader design={info} editor={editor} uploading={uploading} onUpload={() => setUploading(true)} />
+      <DesignHeader design={info} latest={versions[0] ?? null} editor={editor} uploading={uploading} onUpload={() => setUploading(true)} />
       {uploading ? (
         <UploadVersion
           designId={id}
@@ -55,9 +57,9 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
         />
       ) : null}
       {versions.length === 0 ? (
-        <EmptyState icon="designs" title="No versions yet" testID="design-no-versions">
+        <EmptyState icon="designs" title="No versions yet" testID="design-no-versions" action={editor ? <BlankDesignActions id={id} onUpload={() => setUploading(true)} /> : null}>
           {editor
-            ? 'This design has no saved version. Upload a topology file as its first version.'
+            ? 'Draw this design on the canvas and save it as version 1, or upload a topology file instead.'
             : 'This design has no saved version yet; the designers are still drawing it.'}
         </EmptyState>
       ) : wide ? (
@@ -72,7 +74,20 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
   );
 }
 
+/** A blank design's next steps: the editor first, a file second. */
+function BlankDesignActions({ id, onUpload }: { id: number; onUpload: () => void }) {
+  return (
+    <View style={styles.blankActions}>
+      <Link href={editorHref(id)} asChild>
+        <Button label="Open in editor" testID="design-no-versions-edit" />
+      </Link>
+      <Button label="Upload a file" variant="ghost" onPress={onUpload} testID="design-no-versions-upload" />
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
+  blankActions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, justifyContent: 'center' },
   split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
   master: { flex: 2, minWidth: 0 },
   detail: { flex: 3, minWidth: 0 },

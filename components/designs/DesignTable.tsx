@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Text, colors, radius, space } from '@/components/ui';
 import { LinkRow } from '@/components/designs/LinkRow';
-import { StatusBadge } from '@/components/designs/StatusBadge';
+import { DesignStatus } from '@/components/designs/DesignStatus';
 import { SummaryLine } from '@/components/designs/SummaryLine';
 import { designHref } from '@/lib/designs/links';
 import { formatDateTime } from '@/lib/format';
@@ -41,7 +41,7 @@ export function DesignTable({ designs }: { designs: readonly DesignListItem[] })
               ) : null}
             </View>
             <View style={{ flex: COLUMNS[1].flex }} role="cell">
-              <StatusBadge status={design.status} testID={`design-${design.id}-status`} />
+              <DesignStatus status={design.status} approvedVersion={design.approvedVersion} latest={design.latestVersion} testID={`design-${design.id}-status`} />
             </View>
             <View style={{ flex: COLUMNS[2].flex }} role="cell" testID={`design-${design.id}-latest`}>
               <Text variant="small">{design.latestVersion ? `Version ${design.latestVersion.number}` : 'No versions yet'}</Text>

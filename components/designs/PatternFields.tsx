@@ -13,6 +13,8 @@ type PatternFieldsProps = { values: PatternValues; onChange: (values: PatternVal
 /** Which pattern and how big; the built document is previewed with its analysis as the numbers change. */
 export function PatternFields({ values, onChange, name, errors }: PatternFieldsProps) {
   const built = useMemo(() => buildPattern(values, name), [values, name]);
+  // A number out of range says so under its field as it is typed, not only when the form is sent.
+  const shown: FieldErrors = { ...(built.errors ?? {}), ...errors };
   const set = (field: keyof PatternValues) => (text: string) => onChange({ ...values, [field]: text });
   return (
     <View style={styles.wrap} testID="new-design-pattern">
@@ -22,13 +24,13 @@ export function PatternFields({ values, onChange, name, errors }: PatternFieldsP
       </Text>
       <View style={styles.numbers}>
         <View style={styles.number}>
-          <TextField label="Hosts" value={values.hosts} onChangeText={set('hosts')} inputMode="numeric" error={errors.hosts} testID="new-design-hosts" />
+          <TextField label="Hosts" value={values.hosts} onChangeText={set('hosts')} inputMode="numeric" error={shown.hosts} testID="new-design-hosts" />
         </View>
         <View style={styles.number}>
-          <TextField label="Cards per host" value={values.cardsPerHost} onChangeText={set('cardsPerHost')} inputMode="numeric" error={errors.cardsPerHost} testID="new-design-cards" />
+          <TextField label="Cards per host" value={values.cardsPerHost} onChangeText={set('cardsPerHost')} inputMode="numeric" error={shown.cardsPerHost} testID="new-design-cards" />
         </View>
         <View style={styles.number}>
-          <TextField label="Ports per card" value={values.portsPerCard} onChangeText={set('portsPerCard')} inputMode="numeric" error={errors.portsPerCard} testID="new-design-ports" />
+          <TextField label="Ports per card" value={values.portsPerCard} onChangeText={set('portsPerCard')} inputMode="numeric" error={shown.portsPerCard} testID="new-design-ports" />
         </View>
       </View>
       {built.doc ? <DocumentPreview doc={built.doc} title="This pattern starts with" testID="new-design-preview" /> : null}

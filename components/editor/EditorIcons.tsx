@@ -5,7 +5,7 @@ import { colors, type ColorName } from '@/components/ui';
 /** The editor's line icons, drawn for Cablewright on the design system's 24-unit grid. */
 export type EditorIconName =
   | 'undo' | 'redo' | 'zoomIn' | 'zoomOut' | 'fit' | 'arrange' | 'help' | 'export' | 'save' | 'trash'
-  | 'plus' | 'minus' | 'close' | 'findings' | 'networks' | 'canvas' | 'back' | 'add' | 'pan';
+  | 'plus' | 'minus' | 'close' | 'findings' | 'networks' | 'canvas' | 'back' | 'add' | 'pan' | 'tag';
 
 type P = { stroke: string; strokeWidth: number; fill: 'none'; strokeLinecap: 'round'; strokeLinejoin: 'round' };
 
@@ -68,6 +68,8 @@ const drawings: Record<EditorIconName, (p: P) => ReactNode> = {
       <Path d="M12 8v8M8 12h8" {...p} />
     </>
   ),
+  // A luggage tag: a cable's printed label.
+  tag: (p) => <Path d="M4 4h8l8 8-8 8-8-8zM8.5 8.5v.01" {...p} />,
   pan: (p) => <Path d="M12 3v18M3 12h18M12 3l-2.5 2.5M12 3l2.5 2.5M12 21l-2.5-2.5M12 21l2.5-2.5M3 12l2.5-2.5M3 12l2.5 2.5M21 12l-2.5-2.5M21 12l-2.5 2.5" {...p} />,
 };
 

@@ -9,6 +9,9 @@ import { editorStore } from '@/lib/editor/store';
 import { Inspector, inspectorTitle } from '@/components/inspector/Inspector';
 import { BottomSheet } from '@/components/editor/BottomSheet';
 import { CablingStrip } from '@/components/editor/CablingStrip';
+import { ConnectList } from '@/components/editor/ConnectList';
+import { DevicePortList } from '@/components/editor/DevicePortList';
+import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { FindingsPanel } from '@/components/editor/FindingsPanel';
 import { Palette } from '@/components/editor/Palette';
 
@@ -44,8 +47,9 @@ export function SidePanels() {
 type PhoneSheetsProps = { sheet: null | 'add' | 'findings'; onSheet: (sheet: null | 'add' | 'findings') => void; hasSelection: boolean };
 
 /**
- * The phone's sheets: the palette or findings when asked for; while a cable is being started from the
- * selected port, a short strip that leaves the canvas free; else the inspector while something is selected.
+ * The phone's sheets: the palette or findings when asked for; "Connect to…" or a device's port list
+ * while one is open; while a cable is being started from the selected port, a short strip that
+ * leaves the canvas free; else the inspector while something is selected.
  */
 export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) {
   const [expanded, setExpanded] = useState(false);
@@ -54,6 +58,8 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
   const doc = useEditorDoc();
   const selection = useSelection();
   const pending = usePendingCableStart();
+  const connectFrom = useStore(canvasUiStore, (s) => s.connectFrom);
+  const portList = useStore(canvasUiStore, (s) => s.portList);
   const toggle = () => setExpanded(!expanded);
   if (sheet === 'add') {
     return (
@@ -69,6 +75,25 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
       </BottomSheet>
     );
   }
+  // Closing the list lets go of its device too, so no settings sheet takes its place.
+  const closePortList = () => {
+    canvasUiStore.setState({ portList: null });
+    if (!editorStore.getState().pendingCableStart) editorStore.getState().clearSelection();
+  };
+  if (connectFrom) {
+    return (
+      <BottomSheet title="Connect to…" expanded onToggle={toggle} onClose={() => canvasUiStore.setState({ connectFrom: null })} testID="sheet-connect">
+        <ConnectList from={connectFrom} />
+      </BottomSheet>
+    );
+  }
+  if (portList) {
+    return (
+      <BottomSheet title={`Ports of ${subjectLabel(doc, portList.deviceId)}`} expanded={expanded} onToggle={toggle} onClose={closePortList} testID="sheet-ports">
+        <DevicePortList deviceId={portList.deviceId} />
+      </BottomSheet>
+    );
+  }
   if (!hasSelection) return null;
   // Closing also ends a cable begun from the selected port, so a later tap cannot finish a hidden one.
   const close = () => {
@@ -77,7 +102,7 @@ export function PhoneSheets({ sheet, onSheet, hasSelection }: PhoneSheetsProps) 
     setDetailsFor(null);
   };
   if (pending && selection.length === 1 && selection[0] === pending && detailsFor !== pending) {
-    return <CablingStrip from={subjectLabel(doc, pending)} onDetails={() => setDetailsFor(pending)} onStop={close} />;
+    return <CablingStrip from={subjectLabel(doc, pending)} onConnect={() => canvasUiStore.setState({ connectFrom: pending })} onDetails={() => setDetailsFor(pending)} onStop={close} />;
   }
   return (
     // Keyed by the selection so a new selection's form starts scrolled to its top.

@@ -14,6 +14,8 @@ import { withTidyLayout } from '@/lib/editor/tidy';
 import { clearWorkingCopy, defaultStorage } from '@/lib/editor/working-copy';
 import { Canvas } from '@/components/canvas/Canvas';
 import { CableChooser } from '@/components/editor/CableChooser';
+import { CableNoticeBar } from '@/components/editor/CableNoticeBar';
+import { PortListOverlays } from '@/components/editor/PortListOverlays';
 import { CanvasControls } from '@/components/editor/CanvasControls';
 import { runShortcut } from '@/components/editor/editor-actions';
 import { PhoneSheets, SidePanels } from '@/components/editor/EditorPanels';
@@ -45,7 +47,7 @@ export function EditorScreen({ designId }: { designId: number }) {
   wideRef.current = wide;
   const session = useEditorSession(designId);
   const queryClient = useQueryClient();
-  const gestures = useMemo(() => createGestures({ marquee: () => wideRef.current }), []);
+  const gestures = useMemo(() => createGestures({ marquee: () => wideRef.current, directCable: () => !wideRef.current }), []);
   const [view, setView] = useState<EditorView>('canvas');
   const [dialog, setDialog] = useState<Dialog>(null);
   const [savedAs, setSavedAs] = useState<number | null>(null);
@@ -53,6 +55,7 @@ export function EditorScreen({ designId }: { designId: number }) {
   const [paletteOpen, setPaletteOpen] = useState<boolean | null>(null);
   const [noticeHidden, setNoticeHidden] = useState(false);
   const chooser = useStore(canvasUiStore, (s) => s.chooser);
+  const listOpen = useStore(canvasUiStore, (s) => s.connectFrom !== null || s.portList !== null);
   const dirty = useDirty();
   const readOnly = useReadOnly();
   const selection = useSelection();
@@ -62,7 +65,7 @@ export function EditorScreen({ designId }: { designId: number }) {
     if (ready && paletteOpen === null) setPaletteOpen(editorStore.getState().doc.devices.length === 0);
   }, [ready, paletteOpen]);
 
-  useEditorWiring({ ready, readOnly, wide, gestures, selection });
+  useEditorWiring({ ready, shown: ready || session.state.status === 'restore', readOnly, wide, gestures, selection });
 
   const guard = useLeaveGuard(ready && dirty && !readOnly);
   const leave = useCallback((href: string) => router.push(href as Href), []);
@@ -77,7 +80,7 @@ export function EditorScreen({ designId }: { designId: number }) {
     setDialog(null);
   };
 
-  const overlayOpen = dialog !== null || chooser !== null || guard.pending !== null || session.state.status === 'restore';
+  const overlayOpen = dialog !== null || chooser !== null || listOpen || guard.pending !== null || session.state.status === 'restore';
   useEditorShortcuts(ready && wide && view === 'canvas' && !overlayOpen, (action) =>
     runShortcut(action, { gestures, openSave: () => dirty && setDialog('save'), openHelp: () => setDialog('help') }),
   );
@@ -90,6 +93,7 @@ export function EditorScreen({ designId }: { designId: number }) {
     <View style={styles.canvasArea}>
       <Canvas gestures={gestures} />
       <CanvasControls gestures={gestures} />
+      <CableNoticeBar />
       {state.status === 'ready' && !noticeHidden ? <EditorNotices layoutFixed={state.layoutFixed} savedAs={dirty ? null : savedAs} readOnly={readOnly} onClose={() => setNoticeHidden(true)} /> : null}
     </View>
   );
@@ -106,6 +110,7 @@ export function EditorScreen({ designId }: { designId: number }) {
         onAdd={() => (wide ? setPaletteOpen(!paletteOpen) : setPhoneSheet('add'))}
         paletteOpen={wide && !!paletteOpen}
         onFindings={() => setPhoneSheet('findings')}
+        approvedVersion={session.design?.design.approvedVersion?.number ?? null}
       />
       {view === 'networks' ? (
         <NetworksScreen wide={wide} />
@@ -126,6 +131,7 @@ export function EditorScreen({ designId }: { designId: number }) {
         </View>
       )}
       <CableChooser wide={wide} />
+      {wide ? <PortListOverlays /> : null}
       {dialog === 'help' ? <HelpSheet wide={wide} onClose={() => setDialog(null)} /> : null}
       {dialog === 'save' ? (
         <SaveDialog

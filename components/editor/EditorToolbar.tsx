@@ -24,6 +24,8 @@ type ToolbarProps = {
   onFindings: () => void;
   /** Wide screens: whether the palette column is shown. */
   paletteOpen: boolean;
+  /** The design's newest approved version, so the status never lets a draft pass for it. */
+  approvedVersion?: number | null;
 };
 
 /** The same words as the findings list: problems are errors; warnings only when there are some. */
@@ -32,12 +34,20 @@ function findingCounts(findings: readonly Finding[]): string {
   return `${plural(error, 'problem')}${warning > 0 ? `, ${plural(warning, 'warning')}` : ''}`;
 }
 
-function Status() {
+/** "version 3, approved", "version 4 · approved v3", "version 2". */
+function versionWords(base: number | null, approved: number | null): string {
+  if (base === null) return 'no version yet';
+  if (approved === base) return `version ${base}, approved`;
+  return approved === null ? `version ${base}` : `version ${base} · approved v${approved}`;
+}
+
+function Status({ approved }: { approved: number | null }) {
   const dirty = useDirty();
   const readOnly = useReadOnly();
   const base = useBaseVersion();
   const counts = useStore(liveAnalysisStore, (s) => (s.report ? findingCounts(s.report.findings) : null));
-  const version = base === null ? 'no version yet' : `version ${base}`;
+  // While unsaved the line is about the work in progress; the approval is told once it is saved or read.
+  const version = versionWords(base, dirty && !readOnly ? null : approved);
   const state = readOnly ? `Read-only · ${version}` : dirty ? (base === null ? 'Unsaved · no version yet' : `Unsaved · on ${version}`) : base === null ? 'No version saved yet' : `Saved · ${version}`;
   return (
     <Text variant="caption" color={dirty && !readOnly ? 'copper' : 'inkMuted'} numberOfLines={1} testID="editor-status">
@@ -47,7 +57,7 @@ function Status() {
 }
 
 /** The editor's bar: back, the design and its state, undo/redo, arrange, views, export, help and save. */
-export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAdd, onFindings, paletteOpen }: ToolbarProps) {
+export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAdd, onFindings, paletteOpen, approvedVersion = null }: ToolbarProps) {
   const name = useEditorDoc().name;
   const readOnly = useReadOnly();
   const dirty = useDirty();
@@ -78,7 +88,7 @@ export function EditorToolbar({ wide, view, onView, onBack, onSave, onHelp, onAd
           <Text variant="bodyStrong" numberOfLines={1} testID="editor-design-name">
             {name}
           </Text>
-          <Status />
+          <Status approved={approvedVersion} />
         </View>
         {wide ? <View style={styles.tools}>{tools}</View> : null}
         {save}

@@ -13,6 +13,7 @@ import { editorStore } from '@/lib/editor/store';
 import { severityCounts } from '@/lib/report/view';
 import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { FindingLine } from '@/components/inspector/FindingsAbout';
+import { ruleTitle } from '@/lib/report/rule-titles';
 
 type Filter = 'all' | Severity;
 
@@ -75,10 +76,10 @@ export function FindingsPanel({ onFocused }: { onFocused?: () => void }) {
           <FindingLine finding={finding} />
           {finding.subjects.length > 0 ? (
             <Text variant="caption" color="inkMuted" numberOfLines={2}>
-              {`${finding.rule} · ${finding.subjects.slice(0, 4).map((id) => subjectLabel(doc, id)).join(', ')}${finding.subjects.length > 4 ? '…' : ''}`}
+              {`${ruleTitle(finding.rule)} · ${finding.subjects.slice(0, 4).map((id) => subjectLabel(doc, id)).join(', ')}${finding.subjects.length > 4 ? '…' : ''}`}
             </Text>
           ) : (
-            <Text variant="caption" color="inkMuted">{`${finding.rule} · the whole design`}</Text>
+            <Text variant="caption" color="inkMuted">{`${ruleTitle(finding.rule)} · the whole design`}</Text>
           )}
         </Pressable>
       ))}

@@ -2,16 +2,14 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Banner, Button, Text, colors, radius, space } from '@/components/ui';
 import { PATTERN_IDS, type PatternId } from '@/lib/editor/commands';
+import { PATTERNS } from '@/shared/patterns';
 import { useEditorDoc } from '@/lib/editor/hooks';
 import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { NumberStepper } from '@/components/editor/NumberStepper';
 import { applyPatternFromPalette } from '@/components/editor/palette-actions';
 
-const PATTERN_LABELS: Record<PatternId, { label: string; about: string }> = {
-  'direct-attach': { label: 'Direct attach', about: 'Hosts cabled straight to both controllers, no switches.' },
-  'dual-fabric': { label: 'Two fabrics', about: 'Two data switches, one subnet each; every host on both.' },
-  'dual-fabric-management': { label: 'Two fabrics + management', about: 'Two fabrics and a separate management switch and network.' },
-};
+// The shared patterns' own names and sentences, as the new-design form shows them.
+const patternOf = (id: PatternId) => PATTERNS.find((p) => p.id === id)!;
 
 type Mode = 'replace' | 'merge';
 
@@ -26,9 +24,9 @@ export function PatternStarter({ onApplied }: { onApplied: () => void }) {
   return (
     <View style={styles.wrap} testID="pattern-starter">
       <Text variant="bodyStrong">Start from a pattern</Text>
-      <ChipPicker<PatternId> label="Pattern" chips={PATTERN_IDS.map((id) => ({ value: id, label: PATTERN_LABELS[id].label }))} value={pattern} onChange={setPattern} testID="pattern-choice" />
+      <ChipPicker<PatternId> label="Pattern" chips={PATTERN_IDS.map((id) => ({ value: id, label: patternOf(id).name }))} value={pattern} onChange={setPattern} testID="pattern-choice" />
       <Text variant="small" color="inkMuted">
-        {PATTERN_LABELS[pattern].about}
+        {patternOf(pattern).about}
       </Text>
       <NumberStepper label="Hosts" value={hosts} min={1} max={32} onChange={setHosts} testID="pattern-hosts" />
       {!empty ? (

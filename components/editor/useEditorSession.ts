@@ -12,7 +12,7 @@ import { sameDocument } from '@/shared/topology/canonical';
 /**
  * Opening a design in the editor: the design, its newest version's document, and the working copy
  * this browser kept. When a working copy exists the designer chooses first — restore it (the store
- * starts dirty against the server's document) or discard it. Decided once per design and mount:
+ * starts dirty against the server's document) or discard it — with the saved version drawn behind. Decided once per design and mount:
  * a later refresh of the design query never replaces the work in progress.
  *
  * A saved layout whose boxes overlap on this canvas (older patterns placed devices 200 px apart)
@@ -63,8 +63,11 @@ export function useEditorSession(designId: number) {
       clearWorkingCopy(storage, designId);
       copy = null;
     }
-    if (copy) setState({ status: 'restore', copy, serverDoc, latest });
-    else open(serverDoc, latest);
+    if (copy) {
+      // Behind the question the canvas shows the saved version, not an empty "Untitled" drawing.
+      editorStore.getState().load(withTidyLayout(serverDoc).doc, { designId, baseVersion: latest, readOnly });
+      setState({ status: 'restore', copy, serverDoc, latest });
+    } else open(serverDoc, latest);
   }, [designId, serverDoc, me.data, latest, readOnly, open]);
 
   const restore = useCallback(() => {

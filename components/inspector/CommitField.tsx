@@ -14,6 +14,8 @@ type CommitFieldProps<T> = {
   hint?: string;
   /** A finding about this field, shown under it while the typed value is fine. */
   note?: string | null;
+  /** What is wrong with a value that is still accepted (the analysis will report it), shown while typing. */
+  advise?: (text: string) => string | null;
   testID?: string;
   readOnly?: boolean;
   placeholder?: string;
@@ -26,7 +28,7 @@ type CommitFieldProps<T> = {
  * valid and different. When the document changes underneath (undo, redo), the field follows
  * unless the designer is typing in it.
  */
-export function CommitField<T>({ label, value, schema, onCommit, hint, note, testID, readOnly, placeholder, keyboardType }: CommitFieldProps<T>) {
+export function CommitField<T>({ label, value, schema, onCommit, hint, note, advise, testID, readOnly, placeholder, keyboardType }: CommitFieldProps<T>) {
   const [draft, setDraft] = useState(value);
   const [error, setError] = useState<string | null>(null);
   const focused = useRef(false);
@@ -65,7 +67,7 @@ export function CommitField<T>({ label, value, schema, onCommit, hint, note, tes
       autoCapitalize="none"
       autoCorrect={false}
       testID={testID}
-      error={error ?? (draft === value ? (note ?? null) : null)}
+      error={error ?? (draft === value ? (note ?? null) : (advise?.(draft) ?? null))}
       onFocus={() => {
         focused.current = true;
       }}

@@ -2,7 +2,9 @@ import { StyleSheet, View } from 'react-native';
 import { Button, Text, space } from '@/components/ui';
 import { SWITCH_ROLES, type Device, type SwitchRole, type Topology } from '@/shared/topology/schema';
 import { groupsOf } from '@/lib/editor/commands/doc';
-import { iqnField, nameField, rackField, ruField } from '@/lib/editor/fields';
+import { iqnAdvice, iqnField, nameField, rackField, ruField } from '@/lib/editor/fields';
+import { liveAnalysisStore } from '@/lib/editor/live-analysis';
+import { useStore } from 'zustand';
 import { editorStore } from '@/lib/editor/store';
 import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { CommitField } from '@/components/inspector/CommitField';
@@ -34,10 +36,12 @@ type Props = { device: Device; doc: Topology; readOnly: boolean };
 /** A device: its name, role (switch) or initiator name (host), rack place, parts and findings. */
 export function DeviceInspector({ device, doc, readOnly }: Props) {
   const iqnNote = device.kind === 'host' ? iqnSuggestion(doc, device) : null;
+  const iqnFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'iqn-invalid')?.message ?? null);
+  const nameFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'device-name-duplicate')?.message ?? null);
   const groups = groupsOf(device);
   return (
     <View style={styles.wrap} testID="inspector-device">
-      <CommitField label="Name" value={device.name} schema={nameField} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renameDevice', { id: device.id, name })} />
+      <CommitField label="Name" value={device.name} schema={nameField} note={nameFinding} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renameDevice', { id: device.id, name })} />
       {device.kind === 'switch' ? (
         <ChipPicker<SwitchRole>
           label="Carries"
@@ -56,6 +60,8 @@ export function DeviceInspector({ device, doc, readOnly }: Props) {
             hint="iqn.YYYY-MM.reversed-domain:unique-part, or eui. / naa. names (RFC 7143 §4.2.7). Leave empty if not known yet."
             value={device.iqn ?? ''}
             schema={iqnField}
+            advise={iqnAdvice}
+            note={device.iqn ? (iqnFinding ?? iqnAdvice(device.iqn)) : null}
             readOnly={readOnly}
             placeholder="iqn.2026-01.example.tidewater:host-name"
             testID="inspector-iqn"

@@ -5,6 +5,7 @@ import { cablesOnPort, portLabel } from '@/lib/editor/describe';
 import { nameField } from '@/lib/editor/fields';
 import { editorStore } from '@/lib/editor/store';
 import { usePendingCableStart } from '@/lib/editor/hooks';
+import { canvasUiStore } from '@/lib/editor/canvas-ui';
 import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { CommitField } from '@/components/inspector/CommitField';
 import { FindingsAbout } from '@/components/inspector/FindingsAbout';
@@ -27,8 +28,20 @@ export function PortInspector({ port, device, group, doc, readOnly }: Props) {
       <Text variant="small" color="inkMuted">{`A port of ${[device.name, group?.name].filter(Boolean).join(' ')}.`}</Text>
       {!readOnly ? (
         <Text variant="small" color={pending === port.id ? 'copper' : 'inkMuted'} testID="inspector-cable-hint">
-          {pending === port.id ? 'Cable start: tap the port at the other end on the canvas (tap this one again or press Escape to stop).' : 'Tap this port on the canvas to start a cable from it.'}
+          {pending === port.id ? 'Cable start: tap the port at the other end on the canvas (tap this one again or press Escape to stop), or choose it from a list.' : 'Tap this port on the canvas to start a cable from it, or choose the other end from a list.'}
         </Text>
+      ) : null}
+      {!readOnly ? (
+        <Button
+          label="Connect to…"
+          variant="secondary"
+          size="compact"
+          testID="inspector-connect"
+          onPress={() => {
+            editorStore.getState().startCable(port.id);
+            canvasUiStore.setState({ connectFrom: port.id });
+          }}
+        />
       ) : null}
       <CommitField label="Name" value={port.name} schema={nameField} readOnly={readOnly} testID="inspector-name" onCommit={(name) => runEdit('renamePart', { id: port.id, name })} />
       <ChipPicker label="Role" chips={ROLE_CHIPS} value={port.role} disabled={readOnly} testID="inspector-port-role" onChange={(role) => set({ role })} />

@@ -11,9 +11,11 @@ import { runEdit } from '@/components/inspector/run';
 
 const PAGE = 60;
 
-function AddressInput({ row, readOnly }: { row: AddressRow; readOnly: boolean }) {
+type AddressInputProps = { row: AddressRow; readOnly: boolean; error: string | null; setError: (error: string | null) => void };
+
+/** The address as typed; its error lives in the row, so the row's status never says OK beside it. */
+function AddressInput({ row, readOnly, error, setError }: AddressInputProps) {
   const [draft, setDraft] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const shown = draft ?? (row.address === 'DHCP' ? '' : row.address);
   const commit = () => {
     if (draft === null) return;
@@ -53,6 +55,7 @@ function AddressInput({ row, readOnly }: { row: AddressRow; readOnly: boolean })
 }
 
 const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; doc: Topology; readOnly: boolean; wide: boolean }) {
+  const [typingError, setTypingError] = useState<string | null>(null);
   const chips = [{ value: '', label: 'None' }, ...doc.networks.map((n) => ({ value: n.id, label: n.name || n.id }))];
   return (
     <View style={[styles.row, wide && styles.rowWide]} testID={`address-row-${row.portId}`}>
@@ -64,10 +67,17 @@ const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; d
         <ChipPicker label={`Network of ${row.device} ${row.port}`} hideLabel={wide} chips={chips} value={row.networkId ?? ''} disabled={readOnly} testID={`address-network-${row.portId}`} onChange={(id) => runEdit('setPort', { id: row.portId, networkId: id === '' ? null : id })} />
       </View>
       <View style={wide ? styles.colAddress : undefined}>
-        <AddressInput key={row.address} row={row} readOnly={readOnly} />
+        <AddressInput key={row.address} row={row} readOnly={readOnly} error={typingError} setError={setTypingError} />
       </View>
       <View style={[styles.colStatus]} testID={`address-status-${row.portId}`}>
-        {row.problems.length === 0 ? (
+        {typingError ? (
+          <View style={styles.status}>
+            <Icon name="error" size={18} color="dangerText" />
+            <Text variant="small" color="dangerText" style={styles.statusText}>
+              Not saved: fix the address first
+            </Text>
+          </View>
+        ) : row.problems.length === 0 ? (
           <View style={styles.status}>
             <Icon name={row.address ? 'success' : 'info'} size={18} color={row.address ? 'successText' : 'inkMuted'} />
             <Text variant="small" color={row.address ? 'successText' : 'inkMuted'}>
@@ -79,7 +89,7 @@ const Row = memo(function Row({ row, doc, readOnly, wide }: { row: AddressRow; d
             <View key={i} style={styles.status}>
               <Icon name={f.severity === 'error' ? 'error' : 'warning'} size={18} color={f.severity === 'error' ? 'dangerText' : 'warningText'} />
               <Text variant="small" color={f.severity === 'error' ? 'dangerText' : 'warningText'} style={styles.statusText}>
-                <Text variant="smallStrong" color={f.severity === 'error' ? 'dangerText' : 'warningText'}>{`${PROBLEM_WORDS[f.rule] ?? f.rule}: `}</Text>
+                <Text variant="smallStrong" color={f.severity === 'error' ? 'dangerText' : 'warningText'}>{`${PROBLEM_WORDS.get(f.rule) ?? f.rule}: `}</Text>
                 {f.message}
               </Text>
             </View>

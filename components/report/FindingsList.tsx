@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { Card, Heading, Icon, Text, colors, space, type ColorName, type IconName } from '@/components/ui';
 import type { Namer } from '@/lib/report/names';
+import { ruleTitle } from '@/lib/report/rule-titles';
 import { findingsBySeverity, SEVERITY_TITLES } from '@/lib/report/view';
 import type { Finding, Severity } from '@/shared/analysis/types';
 
@@ -10,7 +11,12 @@ const LOOK: Record<Severity, { icon: IconName; color: ColorName }> = {
   info: { icon: 'info', color: 'infoText' },
 };
 
-/** Every finding, errors first: the rule, the things it is about by name, and the reason. */
+/** react-native-web renders `title` as a tooltip; React Native's types do not list it. */
+function webTitle(title: string): object {
+  return { title };
+}
+
+/** Every finding, errors first: its title in words (the rule id small beside it), the reason, and what it is about by name. */
 export function FindingsList({ findings, namer }: { findings: readonly Finding[]; namer: Namer }) {
   return (
     <Card testID="report-findings">
@@ -28,9 +34,14 @@ export function FindingsList({ findings, namer }: { findings: readonly Finding[]
           ) : (
             group.map((finding, i) => (
               <View key={`${finding.rule}-${i}`} style={styles.finding} testID={`report-finding-${finding.rule}`}>
-                <Text variant="caption" color="inkMuted" style={styles.rule}>
-                  {finding.rule}
-                </Text>
+                <View style={styles.titleRow}>
+                  <Text variant="smallStrong" testID={`report-finding-${finding.rule}-title`}>
+                    {ruleTitle(finding.rule)}
+                  </Text>
+                  <Text variant="caption" color="inkMuted" style={styles.rule} aria-label={`rule ${finding.rule}`} {...webTitle(`Rule ${finding.rule}`)}>
+                    {finding.rule}
+                  </Text>
+                </View>
                 <Text variant="small">{finding.message}</Text>
                 {finding.subjects.length > 0 ? (
                   <Text variant="caption" color="inkMuted">{`About: ${finding.subjects.map(namer.name).join(', ')}`}</Text>
@@ -48,5 +59,6 @@ const styles = StyleSheet.create({
   group: { gap: space.sm },
   groupHead: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   finding: { gap: 2, paddingLeft: space.md, borderLeftWidth: 3, borderLeftColor: colors.line },
-  rule: { fontFamily: 'monospace' },
+  titleRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', columnGap: space.sm },
+  rule: { fontFamily: 'monospace', fontSize: 11 },
 });

@@ -8,11 +8,7 @@ import type { Topology } from '@/shared/topology/schema';
 export type StartKind = 'blank' | 'pattern' | 'import';
 export type PatternId = (typeof PATTERNS)[number]['id'];
 
-export const PATTERN_HINTS: Record<PatternId, string> = {
-  'direct-attach': 'No switches: each host card is cabled straight to a controller, one subnet per controller.',
-  'dual-fabric': 'Two data switches, one subnet each; every host has one storage port on each, on different cards.',
-  'dual-fabric-management': 'Dual fabric, plus management ports on a separate management switch and network.',
-};
+export const PATTERN_HINTS = Object.fromEntries(PATTERNS.map((p) => [p.id, p.about])) as Record<PatternId, string>;
 
 /**
  * The form's own limits on a pattern: enough for any server room a pattern is a sensible start

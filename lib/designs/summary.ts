@@ -49,3 +49,32 @@ export function summaryTone(summary: ReportSummary): 'success' | 'warning' | 'da
   if (summary.warnings > 0 || summary.redundantHosts < summary.hosts) return 'warning';
   return 'success';
 }
+
+/** A design's state in lower case, after a "·" ("draft v4", "in review v4"). */
+const STATE_WORDS: Record<DesignStatus, string> = { draft: 'draft', 'in-review': 'in review', approved: 'approved', 'changes-requested': 'changes asked' };
+
+export type StatusPart = { label: string; tone: StatusTone };
+
+/**
+ * What a design's status says, so a newer draft never hides behind an older approval: the approved
+ * version and, when a newer one follows it, that one with its own state ("Approved v3 · draft v4").
+ * Without an approval, the newest version's state ("In review v2"); without versions, "Draft".
+ */
+export function statusParts(design: {
+  status: DesignStatus;
+  approvedVersion: { number: number } | null;
+  latest: { number: number; review: DesignStatus } | null;
+}): StatusPart[] {
+  const { approvedVersion: approved, latest } = design;
+  if (approved) {
+    const parts: StatusPart[] = [{ label: `Approved v${approved.number}`, tone: 'success' }];
+    if (latest && latest.number > approved.number) parts.push({ label: `${STATE_WORDS[latest.review]} v${latest.number}`, tone: STATUS_TONES[latest.review] });
+    return parts;
+  }
+  if (!latest) return [{ label: STATUS_LABELS[design.status], tone: STATUS_TONES[design.status] }];
+  return [{ label: `${STATUS_LABELS[latest.review]} v${latest.number}`, tone: STATUS_TONES[latest.review] }];
+}
+
+export function statusText(parts: readonly StatusPart[]): string {
+  return parts.map((p) => p.label).join(' · ');
+}

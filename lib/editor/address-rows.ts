@@ -24,13 +24,14 @@ export type AddressRow = {
 export type AddressFilter = 'all' | 'problems' | 'unaddressed';
 
 /** A few words for each rule, shown with its icon; the full sentence goes beside it. */
-export const PROBLEM_WORDS: Record<string, string> = {
-  'address-duplicate': 'Duplicate',
-  'address-outside-network': 'Outside its network',
-  'address-reserved': 'Reserved address',
-  'port-unaddressed': 'No address',
-  'management-data-same-subnet': 'Wrong kind of network',
-};
+export const PROBLEM_WORDS: ReadonlyMap<string, string> = new Map([
+  ['address-duplicate', 'Duplicate'],
+  ['address-outside-network', 'Outside its network'],
+  ['address-reserved', 'Reserved address'],
+  ['port-unaddressed', 'No address'],
+  ['management-data-same-subnet', 'Wrong kind of network'],
+  ['target-address-dhcp', 'Target on DHCP'],
+]);
 
 export function addressRows(doc: Topology, marks: CanvasMarks, filter: AddressFilter = 'all', query = ''): AddressRow[] {
   const q = query.trim().toLowerCase();

@@ -6,7 +6,7 @@ import type { Rect } from '@/lib/editor/shape';
  * SVG export so the two always look alike. The silhouettes, marks and cable styles are
  * Cablewright's own: an array is a box with a plinth and a stack mark, a switch has cut corners
  * and a two-way mark, a host has a tab on its top edge. Meaning never rests on colour alone: cable
- * media differ by dash pattern and width, fabrics by a letter tag, single points of failure by a
+ * media differ by dash pattern, width and the code in their tag (Cat 6 "6", Cat 6A "6A"), fabrics by a letter tag, single points of failure by a
  * dashed outline, a hatch and a marker.
  */
 
@@ -39,24 +39,34 @@ export const FONT_FAMILY = "Inter, 'Inter_400Regular', 'Helvetica Neue', Arial, 
 export const FONT_FAMILY_BOLD = "Inter, 'Inter_600SemiBold', 'Helvetica Neue', Arial, sans-serif";
 
 export type MediaFamily = 'copper' | 'fibre' | 'direct-attach' | 'active-optical';
-export type CableStyle = { family: MediaFamily; width: number; dash: string | null; label: string };
+/** `short` is the medium's code in a cable's tag ("6", "6A"), so Category 6 and 6A differ in words, not only in width. */
+export type CableStyle = { family: MediaFamily; width: number; dash: string | null; label: string; short: string };
 
 const MEDIA_STYLE: Record<Media, CableStyle> = {
   // Twisted-pair copper: solid lines, the better category a little wider.
-  cat5e: { family: 'copper', width: 1.5, dash: null, label: 'Cat 5e copper' },
-  cat6: { family: 'copper', width: 2, dash: null, label: 'Cat 6 copper' },
-  cat6a: { family: 'copper', width: 2.5, dash: null, label: 'Cat 6A copper' },
+  cat5e: { family: 'copper', width: 1.5, dash: null, label: 'Cat 5e copper', short: '5e' },
+  cat6: { family: 'copper', width: 2, dash: null, label: 'Cat 6 copper', short: '6' },
+  cat6a: { family: 'copper', width: 3, dash: null, label: 'Cat 6A copper', short: '6A' },
   // Multimode fibre: long dashes.
-  om3: { family: 'fibre', width: 2, dash: '12 5', label: 'OM3 fibre' },
-  om4: { family: 'fibre', width: 2.5, dash: '12 5', label: 'OM4 fibre' },
+  om3: { family: 'fibre', width: 2, dash: '12 5', label: 'OM3 fibre', short: 'OM3' },
+  om4: { family: 'fibre', width: 2.5, dash: '12 5', label: 'OM4 fibre', short: 'OM4' },
   // Direct-attach copper: a heavy line of short dashes (a thick, stiff, short cable).
-  dac: { family: 'direct-attach', width: 4, dash: '3 3', label: 'Direct-attach copper' },
+  dac: { family: 'direct-attach', width: 4, dash: '3 3', label: 'Direct-attach copper', short: 'DAC' },
   // Active optical: dash and dot.
-  aoc: { family: 'active-optical', width: 2.5, dash: '10 4 2 4', label: 'Active optical' },
+  aoc: { family: 'active-optical', width: 2.5, dash: '10 4 2 4', label: 'Active optical', short: 'AOC' },
 };
 
 export function cableStyle(media: Media): CableStyle {
   return MEDIA_STYLE[media];
+}
+
+/** What a cable's tag says: its fabric and medium ("A · 6A"), or its printed label ("HR-A-07"). */
+export type CableTagMode = 'fabric' | 'label';
+
+export function cableTagText(mode: CableTagMode, cable: { id: string; label?: string; media: Media }, fabricTag: string | null): string {
+  if (mode === 'label') return cable.label?.trim() || cable.id;
+  const short = MEDIA_STYLE[cable.media].short;
+  return fabricTag ? `${fabricTag} · ${short}` : short;
 }
 
 export const MEDIA_LABELS: Record<Media, string> = Object.fromEntries(

@@ -3,6 +3,7 @@ import { MEDIA } from '@/shared/topology/schema';
 import { splitIds } from '@/shared/keys/tuple';
 import {
   cableStyle,
+  cableTagText,
   FONT_FAMILY,
   FONT_FAMILY_BOLD,
   HATCH_ID,
@@ -70,11 +71,10 @@ function cableSvg(line: CableLine, fabrics: Fabrics, marks: CanvasMarks): string
   const spof = marks.spofCables.has(line.id);
   if (spof) parts.push(`<line ${attrs({ x1: line.a.x, y1: line.a.y, x2: line.b.x, y2: line.b.y, stroke: INK.danger, 'stroke-width': style.width + 6, 'stroke-dasharray': SPOF_DASH, 'stroke-opacity': 0.55 })}/>`);
   parts.push(`<line ${attrs({ x1: line.a.x, y1: line.a.y, x2: line.b.x, y2: line.b.y, stroke: ink, 'stroke-width': style.width, 'stroke-dasharray': style.dash ?? undefined })}/>`);
-  if (fabric) {
-    const w = Math.max(16, textWidth(fabric.tag, 10) + 8);
-    parts.push(`<rect ${attrs({ x: mid.x - w / 2, y: mid.y - 8, width: w, height: 16, rx: 3, fill: INK.surface, stroke: ink })}/>`);
-    parts.push(text(mid.x, mid.y + 4, fabric.tag, { 'text-anchor': 'middle', 'font-size': 10, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 600 }));
-  }
+  const tag = cableTagText('fabric', line.source, fabric?.tag ?? null);
+  const w = Math.max(16, textWidth(tag, 10) + 8);
+  parts.push(`<rect ${attrs({ x: mid.x - w / 2, y: mid.y - 8, width: w, height: 16, rx: 3, fill: INK.surface, stroke: ink })}/>`);
+  parts.push(text(mid.x, mid.y + 4, tag, { 'text-anchor': 'middle', 'font-size': 10, fill: ink, 'font-family': FONT_FAMILY_BOLD, 'font-weight': 600 }));
   if (spof) parts.push(markerSvg(mid.x + 14, mid.y - 22));
   return `<g ${attrs({ id: `cable-${line.id}` })}>${parts.join('')}</g>`;
 }
@@ -137,7 +137,7 @@ function legendSvg(x: number, y: number, used: ReadonlySet<Media>): string {
     const style = cableStyle(media);
     const ry = y + 16 + i * LEGEND_ROW;
     out.push(`<line ${attrs({ x1: x, y1: ry, x2: x + 48, y2: ry, stroke: INK.ink, 'stroke-width': style.width, 'stroke-dasharray': style.dash ?? undefined })}/>`);
-    out.push(text(x + 58, ry + 4, style.label, { 'font-size': 11, fill: INK.ink, 'font-family': FONT_FAMILY }));
+    out.push(text(x + 58, ry + 4, `${style.label} (tag “${style.short}”)`, { 'font-size': 11, fill: INK.ink, 'font-family': FONT_FAMILY }));
   });
   const sy = y + 16 + rows.length * LEGEND_ROW;
   out.push(markerSvg(x + 10, sy - 8));

@@ -21,14 +21,19 @@ const trimmed = z.string().transform((s) => s.trim());
 
 export const nameField = trimmed.pipe(z.string().min(1, 'Give it a name.').max(200, 'Use at most 200 characters.'));
 
-/** Empty removes the initiator name; anything else must be an iSCSI name (RFC 7143 §4.2.7). */
-export const iqnField = trimmed.pipe(
-  z.string().superRefine((value, ctx) => {
-    if (value === '') return;
-    const check = checkIscsiName(value);
-    if (!check.ok) ctx.addIssue({ code: 'custom', message: `Not a valid iSCSI name: ${check.reason}.` });
-  }),
-).transform((s) => (s === '' ? null : s));
+/**
+ * Empty removes the initiator name. Anything else is kept, even a name iSCSI would refuse: a draft
+ * must always be savable, and the analysis reports it (iqn-invalid), naming what is wrong.
+ */
+export const iqnField = trimmed.pipe(z.string().max(1000, 'Use at most 1000 characters.')).transform((s) => (s === '' ? null : s));
+
+/** What is wrong with a typed initiator name, in the analysis rule's words (RFC 7143 §4.2.7); null when nothing is. */
+export function iqnAdvice(text: string): string | null {
+  const value = text.trim();
+  if (value === '') return null;
+  const check = checkIscsiName(value);
+  return check.ok ? null : `Not a valid iSCSI name: ${check.reason}.`;
+}
 
 export const rackField = trimmed.pipe(z.string().max(100, 'Use at most 100 characters.')).transform((s) => (s === '' ? null : s));
 

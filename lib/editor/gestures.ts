@@ -1,18 +1,22 @@
 import { emptyRecord, recordFrom } from '@/shared/keys/record';
 import { canvasUiStore, type CanvasUiStore } from '@/lib/editor/canvas-ui';
 import { makeSnapshotSelector } from '@/lib/editor/hooks';
-import { devicesInRect, hitTest, type Hit } from '@/lib/editor/hit-test';
+import { devicesInRect, hitTest, portsTooSmallToTap, type Hit } from '@/lib/editor/hit-test';
+import { cableNow } from '@/lib/editor/quick-cable';
 import type { Point } from '@/lib/editor/shape';
 import { editorStore, type EditorStore } from '@/lib/editor/store';
-import { fitToBounds, panBy, screenToWorld, snapToGrid, zoomAbout, zoomBy } from '@/lib/editor/viewport';
+import { FIT_MAX_ZOOM, fitPadding, fitToBounds, panBy, screenToWorld, snapToGrid, zoomAbout, zoomBy } from '@/lib/editor/viewport';
 
 /**
  * What pointers do on the canvas, without any DOM: the canvas feeds screen points (CSS px from
  * the canvas's top-left) and this decides. A press on a device becomes a drag once it travels a
  * few pixels (moving the selection if the device is in it), else a tap that selects; a tap on a
- * port selects it and starts a cable, and a tap on a second port opens the cable chooser; a press
- * on empty canvas pans (touch) or draws a marquee (mouse); two touches pinch. The drag is a
- * preview (canvas-ui) until the pointer lifts, then one `moveDevices` command: one undo step.
+ * port selects it and starts a cable, and a tap on a second port opens the cable chooser (or, on
+ * a phone, makes the cable at once and says so in a notice with undo); a press on empty canvas
+ * pans (touch) or draws a marquee (mouse); two touches pinch. A finger never has to hit a port
+ * smaller than 44 × 44 CSS px: when ports are drawn smaller than that, a touch on a port or a card
+ * selects the device and opens its port list instead of guessing which port was meant. The drag is
+ * a preview (canvas-ui) until the pointer lifts, then one `moveDevices` command: one undo step.
  */
 export type PointerKind = 'mouse' | 'touch' | 'pen';
 export type PointerInput = { id: number; kind: PointerKind; point: Point; button?: number; additive?: boolean };
@@ -35,6 +39,8 @@ export type GestureOptions = {
   marquee?: () => boolean;
   /** Space held or the pan tool: every press pans. */
   panOnly?: () => boolean;
+  /** The second port of a cable makes it at once, with a notice, instead of opening the chooser (phone). */
+  directCable?: () => boolean;
 };
 
 export function createGestures(options: GestureOptions = {}) {
@@ -42,6 +48,7 @@ export function createGestures(options: GestureOptions = {}) {
   const ui = options.ui ?? canvasUiStore;
   const marqueeAllowed = options.marquee ?? (() => true);
   const panOnly = options.panOnly ?? (() => store.getState().tool === 'pan');
+  const directCable = options.directCable ?? (() => false);
   const snapshotOf = makeSnapshotSelector();
   const pointers = new Map<number, PointerInput>();
   let mode: Mode = { kind: 'idle' };
@@ -144,30 +151,47 @@ export function createGestures(options: GestureOptions = {}) {
     }
   }
 
-  function tap(hit: Hit | null, additive: boolean) {
+  /**
+   * A touch on a port or card whose ports are too small for a finger: the device is selected (unless
+   * a cable is being drawn from another one) and its ports are listed. The view stays as it is, so
+   * the other end of a cable is still on screen.
+   */
+  function offerPorts(deviceId: string): void {
     const state = editor();
+    ui.setState({ portList: { deviceId }, pointer: null });
+    if (!state.pendingCableStart) state.select([deviceId]);
+  }
+
+  function tapPort(hit: Extract<Hit, { kind: 'port' }>, additive: boolean) {
+    const state = editor();
+    const pending = state.pendingCableStart;
+    if (pending && pending !== hit.id && !state.readOnly && !additive) {
+      if (directCable()) cableNow(hit.id, { store, ui });
+      else ui.setState({ chooser: { a: pending, b: hit.id } });
+      return;
+    }
+    if (pending === hit.id) {
+      state.cancelCable();
+      ui.setState({ pointer: null });
+      return;
+    }
+    if (additive) state.toggleSelection(hit.id);
+    else state.select([hit.id]);
+    if (!state.readOnly && !additive) state.startCable(hit.id);
+  }
+
+  function tap(hit: Hit | null, additive: boolean, pointerKind: PointerKind) {
+    const state = editor();
+    ui.setState({ notice: null });
     if (!hit) {
       state.clearSelection();
       state.cancelCable();
       ui.setState({ pointer: null });
       return;
     }
-    if (hit.kind === 'port') {
-      const pending = state.pendingCableStart;
-      if (pending && pending !== hit.id && !state.readOnly && !additive) {
-        ui.setState({ chooser: { a: pending, b: hit.id } });
-        return;
-      }
-      if (pending === hit.id) {
-        state.cancelCable();
-        ui.setState({ pointer: null });
-        return;
-      }
-      if (additive) state.toggleSelection(hit.id);
-      else state.select([hit.id]);
-      if (!state.readOnly && !additive) state.startCable(hit.id);
-      return;
-    }
+    const fingertip = pointerKind !== 'mouse' && portsTooSmallToTap(state.viewport.zoom);
+    if (fingertip && (hit.kind === 'port' || hit.kind === 'group')) return offerPorts(hit.deviceId);
+    if (hit.kind === 'port') return tapPort(hit, additive);
     state.cancelCable();
     ui.setState({ pointer: null });
     if (additive) state.toggleSelection(hit.id);
@@ -184,7 +208,7 @@ export function createGestures(options: GestureOptions = {}) {
     }
     if (pointers.size > 0) return;
     mode = { kind: 'idle' };
-    if (current.kind === 'press') tap(current.hit, current.additive);
+    if (current.kind === 'press') tap(current.hit, current.additive, current.pointerKind);
     else if (current.kind === 'drag') {
       const drag = ui.getState().drag;
       ui.setState({ drag: null });
@@ -222,7 +246,7 @@ export function createGestures(options: GestureOptions = {}) {
 
   function fit() {
     const screen = ui.getState().screen;
-    editor().setViewport(fitToBounds(snapshot().bounds, screen, 40, 1));
+    editor().setViewport(fitToBounds(snapshot().bounds, screen, fitPadding(screen), FIT_MAX_ZOOM));
   }
 
   return { down, move, up, cancel, wheel, zoomStep, fit, get mode() { return mode.kind; } };

@@ -1,4 +1,4 @@
-import type { Point, Rect } from '@/lib/editor/shape';
+import { PORT_PITCH, type Point, type Rect } from '@/lib/editor/shape';
 import type { Snapshot } from '@/lib/editor/snapshot';
 
 /**
@@ -12,6 +12,19 @@ export type Hit =
   | { kind: 'group'; id: string; deviceId: string }
   | { kind: 'device'; id: string }
   | { kind: 'cable'; id: string };
+
+/** The least a finger's target may measure on screen, in CSS px (WCAG 2.1 SC 2.5.5; common platform guidance). */
+export const MIN_TAP_TARGET = 44;
+
+/** How wide a port's tap target is on screen at this zoom. */
+export function portTargetOnScreen(zoom: number): number {
+  return PORT_PITCH * zoom;
+}
+
+/** Ports drawn too small for a finger: a touch then opens the device's port list instead. */
+export function portsTooSmallToTap(zoom: number): boolean {
+  return portTargetOnScreen(zoom) < MIN_TAP_TARGET - 1e-9;
+}
 
 export function rectContains(rect: Rect, point: Point): boolean {
   return point.x >= rect.x && point.x <= rect.x + rect.width && point.y >= rect.y && point.y <= rect.y + rect.height;

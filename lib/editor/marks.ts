@@ -104,7 +104,7 @@ export function findingsFor(marks: CanvasMarks, id: string): Finding[] {
 }
 
 /** Address problems the networks screen flags per port, from the report's findings. */
-export const ADDRESS_RULES = ['address-duplicate', 'address-outside-network', 'address-reserved', 'port-unaddressed', 'management-data-same-subnet'] as const;
+export const ADDRESS_RULES = ['address-duplicate', 'address-outside-network', 'address-reserved', 'port-unaddressed', 'management-data-same-subnet', 'target-address-dhcp'] as const;
 
 export function addressFindings(marks: CanvasMarks, portId: string): Finding[] {
   return findingsFor(marks, portId).filter((f) => (ADDRESS_RULES as readonly string[]).includes(f.rule));

@@ -43,6 +43,14 @@ export function zoomBy(v: Viewport, screenPoint: Point, factor: number): Viewpor
   return zoomAbout(v, screenPoint, v.zoom * factor);
 }
 
+/** Fit may enlarge a small drawing this far, so it fills the view instead of sitting small in the middle. */
+export const FIT_MAX_ZOOM = 1.5;
+
+/** The margin fit leaves around the drawing: 40 px on a wide canvas, less on a phone (never under 12). */
+export function fitPadding(screen: Size): number {
+  return Math.round(Math.min(40, Math.max(12, 0.04 * screen.width)));
+}
+
 /** The viewport that shows `bounds` whole and centred, never zoomed in beyond `maxZoom`. */
 export function fitToBounds(bounds: Rect | null, screen: Size, padding = 40, maxZoom = 1): Viewport {
   if (!bounds || screen.width <= 0 || screen.height <= 0) return DEFAULT_VIEWPORT;

@@ -88,6 +88,8 @@ export type DesignListItem = {
   status: DesignStatus;
   /** The newest version the caller may see (installers: the newest approved one), or null. */
   latestVersion: { number: number; createdAt: string; summary: ReportSummary; review: ReviewState } | null;
+  /** The newest approved version the caller may see and when it was approved, or null: a newer draft never hides it. */
+  approvedVersion: { number: number; approvedAt: string } | null;
   updatedAt: string;
 };
 

@@ -5,11 +5,23 @@ import type { Topology } from '@/shared/topology/schema';
 /**
  * Direct attach: no switches. Each host's storage ports go straight to the controllers in turn
  * (card 1 to ctl-a, card 2 to ctl-b, …, and with more controllers than cards, port 2 of card 1 to
- * the next one), each controller on a subnet of its own, so every host reaches every controller
- * over a cable of its own and, with two cards or more, loses no controller to one card. A host
- * with fewer storage ports than there are controllers reaches only as many controllers as it has
- * ports. Controllers get one port per host.
+ * the next one), so every host reaches every controller over a cable of its own and, with two
+ * cards or more, loses no controller to one card. A host with fewer storage ports than there are
+ * controllers reaches only as many controllers as it has ports. Controllers get one port per host.
+ *
+ * Every cable is a point-to-point link with a subnet of its own (common practice: a controller
+ * with two links on one subnet cannot tell which port answers for which address). The links take
+ * /30 blocks of the RFC 5737 documentation ranges, 192 of them, then /64s of 2001:db8::/32 (RFC 3849).
  */
+const IPV4_BASES = ['198.51.100', '203.0.113', '192.0.2'];
+const PER_BLOCK = 64;
+
+/** The subnet of the k-th link (0-based). */
+export function directLinkCidr(k: number): string {
+  if (k < IPV4_BASES.length * PER_BLOCK) return `${IPV4_BASES[Math.floor(k / PER_BLOCK)]}.${(k % PER_BLOCK) * 4}/30`;
+  return `2001:db8:0:${(k - IPV4_BASES.length * PER_BLOCK + 1).toString(16)}::/64`;
+}
+
 export function directAttach(options: PatternOptions = {}): Topology {
   const names = hostNames(options.hosts);
   const cards = Math.max(1, options.cardsPerHost ?? DEFAULTS.cardsPerHost);
@@ -22,37 +34,31 @@ export function directAttach(options: PatternOptions = {}): Topology {
   const lengthOf = options.hostCableLengthM ?? (() => 3);
   const b = new PatternBuilder(options.name ?? 'Direct attach', options.labelPrefix ?? '');
 
-  // RFC 5737 documentation ranges, one /24 per controller side.
-  const ranges = ['198.51.100.0/24', '203.0.113.0/24', '192.0.2.0/25', '192.0.2.128/25'];
-  const netIds = Array.from({ length: controllerCount }, (_, c) => `net-${controllerName(c)}`);
-  netIds.forEach((id, c) => b.network({ id, name: `direct ${controllerName(c)}`, purpose: 'data', cidr: ranges[c], mtu: 9000 }));
-
   // Host storage ports, controller by controller: card 1, card 2, … while cards last, then the next
   // port of each card in turn, so no card carries two controllers while another card sits idle.
   const links = Array.from({ length: controllerCount }, (_, c) => ({ card: c % cards, port: Math.floor(c / cards) })).filter(
     (s) => s.port < perCard,
   );
-  const perController = names.length;
+  // One network per (host, linked controller), in host order: link k of the design gets subnet k.
+  const netId = (h: number, c: number) => `net-${names[h]}-${controllerName(c)}`;
+  names.forEach((host, h) =>
+    links.forEach((_, c) => b.network({ id: netId(h, c), name: `${host} ${controllerName(c)}`, purpose: 'data', cidr: directLinkCidr(h * links.length + c), mtu: 9000 })),
+  );
 
   const controllers = Array.from({ length: controllerCount }, (_, c) =>
-    b.group(arrayId, controllerName(c), Array.from({ length: perController }, (_, p): PortSpec => ({ name: `p${p + 1}`, role: 'data', speedGbps, connector, networkId: netIds[c] }))),
+    b.group(arrayId, controllerName(c), names.map((_, h): PortSpec => ({ name: `p${h + 1}`, role: 'data', speedGbps, connector, networkId: c < links.length ? netId(h, c) : undefined }))),
   );
   b.array(arrayId, controllers);
 
-  const used = controllers.map(() => 0);
   names.forEach((host, h) => {
     const adapters = Array.from({ length: cards }, (_, c) =>
       b.group(host, `card-${c + 1}`, Array.from({ length: perCard }, (_, p): PortSpec => {
         const link = links.findIndex((s) => s.card === c && s.port === p);
-        return { name: `p${p + 1}`, role: 'data', speedGbps, connector, networkId: link >= 0 ? netIds[link % controllerCount] : undefined };
+        return { name: `p${p + 1}`, role: 'data', speedGbps, connector, networkId: link >= 0 ? netId(h, link) : undefined };
       })),
     );
     b.host(host, adapters, options.iqnPrefix ? `${options.iqnPrefix}:${host}` : undefined);
-    links.forEach((s, i) => {
-      const c = i % controllerCount;
-      used[c] += 1;
-      b.cable('d', `${host}.card-${s.card + 1}.p${s.port + 1}`, `${controllers[c].id}.p${used[c]}`, media, lengthOf(h));
-    });
+    links.forEach((s, c) => b.cable('d', `${host}.card-${s.card + 1}.p${s.port + 1}`, `${controllers[c].id}.p${h + 1}`, media, lengthOf(h)));
   });
   b.arrange([names, [arrayId]]);
 

@@ -20,8 +20,9 @@ export function dualFabricWithManagement(options: ManagedFabricOptions = {}): To
   return buildFabric({ name: 'Dual fabric with management', ...options }, true);
 }
 
+/** One name and one sentence per pattern, used by every screen that offers them. */
 export const PATTERNS = [
-  { id: 'direct-attach', name: 'Direct attach', build: directAttach },
-  { id: 'dual-fabric', name: 'Dual fabric', build: dualFabric },
-  { id: 'dual-fabric-management', name: 'Dual fabric with management network', build: dualFabricWithManagement },
+  { id: 'direct-attach', name: 'Direct attach', about: 'No switches: each host card is cabled straight to a controller, every cable on a subnet of its own.', build: directAttach },
+  { id: 'dual-fabric', name: 'Dual fabric', about: 'Two data switches, one subnet each; every host has one storage port on each, on different cards.', build: dualFabric },
+  { id: 'dual-fabric-management', name: 'Dual fabric with management', about: 'Dual fabric, plus management ports on a separate management switch and network.', build: dualFabricWithManagement },
 ] as const;

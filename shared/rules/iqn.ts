@@ -44,14 +44,21 @@ function describeCharacter(ch: string): string {
 
 const ALL_ASCII_ALLOWED = /^[a-z0-9.:-]*$/;
 
-/** The first character the prepared name may not hold, or null. */
-function prohibitedCharacter(folded: string): string | null {
-  if (ALL_ASCII_ALLOWED.test(folded)) return null; // nearly every name: no walk over its characters
+/** Every distinct character the prepared name may not hold, in order of first appearance. */
+function prohibitedCharacters(folded: string): string[] {
+  if (ALL_ASCII_ALLOWED.test(folded)) return []; // nearly every name: no walk over its characters
+  const bad: string[] = [];
   for (const ch of folded) {
     const ascii = ch.charCodeAt(0) < 0x80;
-    if (ascii ? !ASCII_ALLOWED.test(ch) : PROHIBITED.test(ch)) return ch;
+    if ((ascii ? !ASCII_ALLOWED.test(ch) : PROHIBITED.test(ch)) && !bad.includes(ch)) bad.push(ch);
   }
-  return null;
+  return bad;
+}
+
+/** "a space", "a space and "_"", "a space, "_" and "/"". */
+function listCharacters(chars: string[]): string {
+  const words = chars.map(describeCharacter);
+  return words.length < 2 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }
 
 const IQN = /^iqn\.(\d{4})-(\d{2})\.([^:]*)(?::(.*))?$/su;
@@ -61,6 +68,7 @@ function checkIqn(folded: string): string | null {
   if (/^iqn\.\d{4}-\d{2}\.?$/.test(folded)) return 'the naming authority, a reversed domain such as com.example, is missing after the date';
   const match = IQN.exec(folded);
   if (!match) return 'an iqn name starts iqn.YYYY-MM. with the year and month its naming authority held the domain';
+  if (Number(match[1]) === 0) return 'the year "0000" is not a year in which anyone held the domain';
   const month = Number(match[2]);
   if (month < 1 || month > 12) return `the month "${match[2]}" is not 01–12`;
   const authority = match[3];
@@ -72,20 +80,19 @@ function checkIqn(folded: string): string | null {
 }
 
 export function checkIscsiName(name: string): IscsiNameCheck {
-  if (name.trim() !== name) return { ok: false, reason: 'it has spaces at its start or end' };
   const folded = foldIscsiName(name);
   const bytes = PRINTABLE_ASCII.test(folded) ? folded.length : new TextEncoder().encode(folded).length;
   if (bytes > LIMITS.iscsiNameMaxBytes.value) {
     return { ok: false, reason: `it is ${bytes} bytes long; the limit is ${LIMITS.iscsiNameMaxBytes.value}` };
   }
+  const bad = prohibitedCharacters(folded);
+  if (bad.length > 0) {
+    const punctuation = bad.some((ch) => ch.charCodeAt(0) < 0x80 && ch !== ' ' && ch.charCodeAt(0) >= 0x20);
+    const hint = punctuation ? ' (of punctuation only "-", "." and ":")' : '';
+    return { ok: false, reason: `it contains ${listCharacters(bad)}, which iSCSI names do not allow${hint}` };
+  }
   const form = folded.slice(0, 4);
   if (form !== 'iqn.' && form !== 'eui.' && form !== 'naa.') return { ok: false, reason: 'it must start with "iqn.", "eui." or "naa."' };
-  const bad = prohibitedCharacter(folded);
-  if (bad !== null) {
-    const punctuation = bad.charCodeAt(0) < 0x80 && bad !== ' ' && bad.charCodeAt(0) >= 0x20;
-    const hint = punctuation ? ' (of punctuation only "-", "." and ":")' : '';
-    return { ok: false, reason: `it contains ${describeCharacter(bad)}, which iSCSI names do not allow${hint}` };
-  }
   if (form === 'iqn.') {
     const reason = checkIqn(folded);
     return reason ? { ok: false, reason } : { ok: true, form: 'iqn', folded };

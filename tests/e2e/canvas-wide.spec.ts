@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { shot, signIn } from './helpers';
-import { analysisSettled, cablePorts, openEditor } from './canvas-helpers';
+import { analysisSettled, cablePorts, designIdByName, openEditor } from './canvas-helpers';
 
 test('from a blank design: a host on one switch has single points of failure, the second path clears them, and the saved version opens again', async ({ page }, testInfo) => {
   await signIn(page, 'ravi@tidewater.example');
@@ -113,6 +113,27 @@ test('the working copy survives a reload and is offered back', async ({ page }) 
   await page.getByTestId('restore-accept').click();
   await expect(page.getByTestId('device-host-1')).toBeVisible();
   await expect(page.getByTestId('editor-status')).toContainText('Unsaved');
+});
+
+test('behind the unsaved-work question the saved version is drawn, not an empty design', async ({ page }, testInfo) => {
+  await signIn(page, 'ravi@tidewater.example');
+  await openEditor(page, await designIdByName(page, 'Harbor Road storage'));
+  await page.getByTestId('device-header-wms-db-2').click();
+  await page.getByTestId('inspector-name').fill('wms-db-spare');
+  await page.getByTestId('inspector-name').press('Enter');
+  await expect(page.getByTestId('device-header-wms-db-2')).toContainText('wms-db-spare');
+  await page.waitForTimeout(800); // the copy is written a moment after the last change
+  await page.reload();
+  await expect(page.getByTestId('restore-prompt')).toBeVisible();
+  // The saved version 2, by name and drawing.
+  await expect(page.getByTestId('editor-design-name')).toHaveText('Harbor Road storage');
+  await expect(page.getByTestId('editor-status')).toContainText('Saved · version 2');
+  await expect(page.getByTestId('device-header-wms-db-2')).toContainText('wms-db-2');
+  await expect(page.locator('[data-testid^="device-"][aria-label]')).not.toHaveCount(0);
+  await shot(page, testInfo, 'canvas-restore-prompt');
+  await page.getByTestId('restore-discard').click();
+  await expect(page.getByTestId('restore-prompt')).toHaveCount(0);
+  await expect(page.getByTestId('device-header-wms-db-2')).toContainText('wms-db-2');
 });
 
 test('a reviewer sees the demo design read-only, without edit affordances', async ({ page }, testInfo) => {

@@ -26,7 +26,7 @@ test('designer starts from a dual-fabric pattern, saves and submits a second ver
   await expect(page.getByTestId('design-screen')).toBeVisible();
   const id = designIdFromUrl(page);
   await expect(page.getByTestId('version-1')).toContainText('First version');
-  await expect(page.getByTestId('design-status')).toHaveText('Draft');
+  await expect(page.getByTestId('design-status')).toHaveAttribute('aria-label', 'Draft v1');
 
   // Download version 1, lengthen every host cable to 12 m, upload it as version 2.
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('version-download').click()]);
@@ -55,7 +55,7 @@ test('designer starts from a dual-fabric pattern, saves and submits a second ver
   await page.getByTestId('review-comment').fill('Cable lengths from the site survey');
   await page.getByTestId('review-submit').click();
   await expect(page.getByTestId('version-2-state')).toHaveText('In review');
-  await expect(page.getByTestId('design-status')).toHaveText('In review');
+  await expect(page.getByTestId('design-status')).toHaveAttribute('aria-label', 'In review v2');
   await shot(page, testInfo, 'submitted');
 
   // Reviewer: the failure report of version 2, what-if with one switch and then both.
@@ -92,7 +92,7 @@ test('designer starts from a dual-fabric pattern, saves and submits a second ver
   await page.getByTestId('review-comment').fill('Both fabrics carry every host; one switch can fail. Approved.');
   await page.getByTestId('review-approve').click();
   await expect(page.getByTestId('version-2-state')).toHaveText('Approved');
-  await expect(page.getByTestId('design-status')).toHaveText('Approved');
+  await expect(page.getByTestId('design-status')).toHaveAttribute('aria-label', 'Approved v2');
   await expect(page.getByTestId('review-thread')).toContainText('Theo Brandt approved it');
   await shot(page, testInfo, 'approved');
 

@@ -69,6 +69,7 @@ describe('listing and searching designs', () => {
         site: 'Harbor Road server room',
         status: 'approved',
         latestVersion: { number: 2, createdAt: expect.any(String), summary: expect.objectContaining({ errors: 0 }), review: 'approved' },
+        approvedVersion: { number: 2, approvedAt: expect.any(String) },
         updatedAt: expect.any(String),
       },
     ]);

@@ -2,7 +2,7 @@ import { analyze } from '@/shared/analysis/analyze';
 import { RULES } from '@/shared/analysis/rules';
 import type { Finding } from '@/shared/analysis/types';
 import { harborRoadV1, harborRoadV2 } from '@/shared/fixtures/harbor-road';
-import type { Topology } from '@/shared/topology/schema';
+import type { HostDevice, Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import { Draft } from './helpers/draft';
 import { randomDesign } from './helpers/random-design';
@@ -32,6 +32,11 @@ function everyMistake(): Topology {
     .network('nc', '203.0.113.0/24', { mtu: 100 }) // below RFC 791's 576
     .network('nd', '192.0.2.7/24') // host bits set
     .network('ne', '169.254.10.0/24') // RFC 3927 link-local
+    .network('nf', '127.0.0.0/8') // RFC 1122 §3.2.1.3 loopback
+    .network('ng', '100.64.0.0/24') // RFC 6598 shared address space
+    .network('nh', '11.0.0.0/24') // outside every special-use (RFC 6890) and private (RFC 1918) block: public
+    .network('ni', '10.20.0.0/24', { purpose: 'management', vlan: 120 })
+    .network('nj', '10.30.0.0/24', { vlan: 120 }) // one VLAN id for management and data (common practice)
     .array('v', { a: [{ networkId: 'na' }, { networkId: 'na' }], b: [{ networkId: 'na' }, { role: 'management', speedGbps: 1 }] })
     .switch('fa')
     .switch('oob', 'management')
@@ -41,6 +46,8 @@ function everyMistake(): Topology {
     .host('h3', { c1: [{ networkId: 'nc' }], c2: [{}] }, { iqn: 'IQN.2026-01.EXAMPLE.TIDEWATER:SAME' })
     .host('h4', { c1: 1 })
     .host('h5', { c1: 1 })
+    .array('w', { a: [{ networkId: 'nj' }, { networkId: 'nj' }] })
+    .host('h6', { c1: [{ networkId: 'nj' }, { networkId: 'nj' }], c2: 1 })
     .link('v.a.1', 'fa')
     .link('h1.c1.1', 'fa')
     .link('fa', 'oob')
@@ -50,7 +57,13 @@ function everyMistake(): Topology {
     .link('h3.c1.1', 'oob') // cabled twice, and a data port on a management switch
     .link('h4.c1.1', 'h5.c1.1')
     .link('v.b.2', 'h3.c2.1')
-    .link('v.a.2', 'fa');
+    .link('v.a.2', 'fa')
+    .link('h6.c1.1', 'w.a.1') // two direct-attach links of w.a on one subnet (common practice)
+    .link('h6.c1.2', 'w.a.2');
+  d.port('v.b.1').address = { mode: 'dhcp' }; // a target portal on DHCP (common practice)
+  d.device('h4').name = 'H5'; // same name as h5 once case is folded
+  (d.device('h6') as HostDevice).adapters[1].name = 'c1'; // two cards named c1
+  d.port('w.a.2').name = '1'; // two ports named 1 on one controller
   d.port('v.a.1').address = { mode: 'static', ip: '203.0.113.9' }; // outside na
   d.port('h1.c1.1').address = { mode: 'static', ip: '198.51.100.255' }; // na's broadcast address
   d.port('v.a.2').address = { mode: 'static', ip: '203.0.113.9' }; // same as v.a.1

@@ -61,6 +61,15 @@ function statusFor(viewer: User, status: DesignStatus): DesignStatus {
   return seesAllVersions(viewer) ? status : 'approved';
 }
 
+/** The newest approved version of those the viewer may see, dated by its latest approval. */
+export function approvedVersionOf(view: DesignView): DesignListItem['approvedVersion'] {
+  const approved = view.versions.find((v) => v.state === 'approved');
+  if (!approved) return null;
+  let at: Date | null = null;
+  for (const e of approved.events) if (e.action === 'approve' && (!at || e.createdAt > at)) at = e.createdAt;
+  return { number: approved.row.number, approvedAt: (at ?? approved.row.createdAt).toISOString() };
+}
+
 export function toDesignDto(view: DesignView, viewer: User): DesignDto {
   const { design } = view;
   return {
@@ -68,6 +77,7 @@ export function toDesignDto(view: DesignView, viewer: User): DesignDto {
     name: design.name,
     site: design.site,
     status: statusFor(viewer, design.status),
+    approvedVersion: approvedVersionOf(view),
     updatedAt: design.updatedAt.toISOString(),
     createdAt: design.createdAt.toISOString(),
     createdBy: design.createdById === null ? null : toPerson(view.people, design.createdById),
@@ -90,6 +100,7 @@ export function toListItem(view: DesignView, viewer: User): DesignListItem {
           review: latest.state,
         }
       : null,
+    approvedVersion: approvedVersionOf(view),
     updatedAt: design.updatedAt.toISOString(),
   };
 }

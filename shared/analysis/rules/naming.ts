@@ -50,7 +50,7 @@ export function namingFindings(ctx: AnalysisContext): Finding[] {
       rule: 'chap-off',
       severity: 'warning',
       subjects: [],
-      message: 'CHAP is off: any initiator that reaches a target port can log in. Turn on one-way or mutual CHAP.',
+      message: 'CHAP is off: any initiator that presents an allowed initiator name can log in, because the name alone is trusted and is easy to claim. Turn on one-way or mutual CHAP.',
     });
   }
   return out;

@@ -1,5 +1,5 @@
 import { blocksOverlap, formatCidr, hasHostBits, parseCidr, type Cidr } from '@/shared/address/cidr';
-import { byId, dataCables, nameOf, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
+import { atSentenceStart, byId, dataCables, nameOf, type AnalysisContext, type DataCableEnds, type EndRole } from '@/shared/analysis/context';
 import type { Finding } from '@/shared/analysis/types';
 import { tupleKey } from '@/shared/keys/tuple';
 import { LIMITS, LINK_LOCAL_RANGES } from '@/shared/rules/limits';
@@ -7,49 +7,99 @@ import type { Network } from '@/shared/topology/schema';
 import { displayName } from '@/shared/topology/index';
 
 /**
- * Network-level rules: overlapping subnets (between two data or two management networks an overlap
- * is network-overlap; between a management and a data network it is management-data-same-subnet),
- * VLAN ids and MTUs out of range (an IPv6 network also below 1280), a subnet written with host bits
- * set or inside a link-local range, and MTU mismatch where a data path joins networks of different
- * MTU. A network without an MTU runs the Ethernet default of 1500 (RFC 894).
+ * Network-level rules: overlapping subnets (network-overlap, whatever the two networks' purposes;
+ * a management network sharing addresses with a data network is also management-data-same-subnet),
+ * a management and a data network on one VLAN id, VLAN ids and MTUs out of range (an IPv6 network
+ * also below 1280), a subnet written with host bits set or inside a link-local range, and MTU
+ * mismatch where a data path joins networks of different MTU. A network without an MTU runs the
+ * Ethernet default of 1500 (RFC 894).
  */
-function compareBlocks(x: { network: Network; block: Cidr }, y: { network: Network; block: Cidr }): number {
+type Parsed = { network: Network; block: Cidr };
+
+function compareBlocks(x: Parsed, y: Parsed): number {
   if (x.block.family !== y.block.family) return x.block.family < y.block.family ? -1 : 1;
   if (x.block.network !== y.block.network) return x.block.network < y.block.network ? -1 : 1;
   // The wider block first, so a block is always visited after every block that contains it.
   return x.block.prefix - y.block.prefix || byId(x.network.id, y.network.id);
 }
 
+/** One open block of the sweep, with the nearest open block of each purpose at or below it. */
+type Open = Parsed & { nearest: Record<Network['purpose'], Parsed | null> };
+
+function overlapFinding(a: Parsed, b: Parsed): Finding {
+  const mixed = a.network.purpose !== b.network.purpose;
+  const what = (x: Parsed) => `${mixed ? `the ${x.network.purpose} network ` : ''}${displayName(x.network)} (${x.network.cidr})`;
+  return {
+    rule: 'network-overlap',
+    severity: 'error',
+    subjects: [a.network.id, b.network.id],
+    message: `${atSentenceStart(`${mixed ? '' : 'networks '}${what(a)}`)} and ${what(b)} overlap; an address in both cannot tell which network it is on.`,
+  };
+}
+
+function mixedFinding(a: Parsed, b: Parsed): Finding {
+  const [m, d] = a.network.purpose === 'management' ? [a, b] : [b, a];
+  return {
+    rule: 'management-data-same-subnet',
+    severity: 'error',
+    subjects: [a.network.id, b.network.id],
+    message: `The management network ${displayName(m.network)} (${m.network.cidr}) and the data network ${displayName(d.network)} (${d.network.cidr}) share addresses; management and data must not share a subnet.`,
+  };
+}
+
 /**
- * CIDR blocks either nest or are disjoint (RFC 4632 §3.1), so overlaps form a containment forest.
- * Each network that overlaps another is reported once, with the narrowest earlier block that contains
- * it (an equal block counts): n networks give at most n − 1 findings, found in one sweep, where listing
- * every pair would grow with the square of the count on a document of many copies of one subnet.
+ * CIDR blocks either nest or are disjoint (RFC 4632 §3.1), so overlaps form a containment forest,
+ * swept once in order with the chain of open (containing) blocks on a stack. Each network inside
+ * an earlier one is reported once, with the narrowest earlier block that contains it (an equal
+ * block counts), of any purpose; and once more, with the narrowest containing block of the other
+ * purpose, when there is one. So n networks give at most 2(n − 1) findings, where listing every
+ * pair would grow with the square of the count on a document of many copies of one subnet.
  */
 function overlapFindings(ctx: AnalysisContext): Finding[] {
   const parsed = ctx.doc.networks
     .map((network) => ({ network, block: parseCidr(network.cidr) }))
-    .filter((x): x is { network: Network; block: Cidr } => x.block !== null)
+    .filter((x): x is Parsed => x.block !== null)
     .sort(compareBlocks);
   const out: Finding[] = [];
-  const open: { network: Network; block: Cidr }[] = [];
+  const open: Open[] = [];
   for (const b of parsed) {
     while (open.length > 0) {
       const top = open[open.length - 1];
       if (top.block.family === b.block.family && b.block.network <= top.block.last) break;
       open.pop();
     }
-    const a = open[open.length - 1];
-    open.push(b);
-    if (!a) continue;
-    const mixed = a.network.purpose !== b.network.purpose;
+    const parent = open[open.length - 1];
+    const other = b.network.purpose === 'data' ? 'management' : 'data';
+    if (parent) {
+      out.push(overlapFinding(parent, b));
+      const mixed = parent.nearest[other];
+      if (mixed) out.push(mixedFinding(mixed, b));
+    }
+    const nearest = { data: parent?.nearest.data ?? null, management: parent?.nearest.management ?? null };
+    nearest[b.network.purpose] = b;
+    open.push({ ...b, nearest });
+  }
+  return out;
+}
+
+/** A management and a data network tagged with one VLAN id share a layer-2 domain (common practice: keep them apart). */
+function sharedVlanFindings(ctx: AnalysisContext): Finding[] {
+  const byVlan = new Map<number, { data: Network[]; management: Network[] }>();
+  for (const network of ctx.doc.networks) {
+    if (network.vlan === undefined) continue;
+    let entry = byVlan.get(network.vlan);
+    if (!entry) byVlan.set(network.vlan, (entry = { data: [], management: [] }));
+    entry[network.purpose].push(network);
+  }
+  const out: Finding[] = [];
+  for (const [vlan, { data, management }] of byVlan) {
+    if (data.length === 0 || management.length === 0) continue;
+    const names = (list: Network[]) => list.map(displayName).join(', ');
     out.push({
-      rule: mixed ? 'management-data-same-subnet' : 'network-overlap',
+      rule: 'management-data-same-vlan',
       severity: 'error',
-      subjects: [a.network.id, b.network.id],
-      message: mixed
-        ? `The ${a.network.purpose} network ${displayName(a.network)} (${a.network.cidr}) and the ${b.network.purpose} network ${displayName(b.network)} (${b.network.cidr}) share addresses.`
-        : `Networks ${displayName(a.network)} (${a.network.cidr}) and ${displayName(b.network)} (${b.network.cidr}) overlap.`,
+      subjects: [...management, ...data].map((n) => n.id),
+      message: `VLAN ${vlan} carries management (${names(management)}) and data (${names(data)}) networks, so they share one layer-2 domain; give management its own VLAN.`,
     });
   }
   return out;
@@ -197,5 +247,5 @@ function mtuFindings(ctx: AnalysisContext): Finding[] {
 }
 
 export function networkFindings(ctx: AnalysisContext): Finding[] {
-  return [...overlapFindings(ctx), ...rangeFindings(ctx), ...blockFindings(ctx), ...mtuFindings(ctx)];
+  return [...overlapFindings(ctx), ...sharedVlanFindings(ctx), ...rangeFindings(ctx), ...blockFindings(ctx), ...mtuFindings(ctx)];
 }

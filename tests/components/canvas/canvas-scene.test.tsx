@@ -39,7 +39,7 @@ function design(): Topology {
 
 beforeEach(() => {
   editorStore.getState().load(design(), { designId: 1, baseVersion: 1 });
-  canvasUiStore.setState({ drag: null, marquee: null, pointer: null, chooser: null });
+  canvasUiStore.setState({ drag: null, marquee: null, pointer: null, chooser: null, cableTags: 'fabric' });
   analyseNow(liveAnalysisStore, editorStore.getState().doc);
 });
 
@@ -84,5 +84,20 @@ describe('the canvas scene', () => {
     act(() => editorStore.getState().select(['host-2-card-1-p1']));
     // Only the newly selected port of host-2 redraws.
     expect(ports.renders - before).toBe(1);
+  });
+
+  it('tells Category 6 from 6A by the words in the cable tag, and shows the printed label when asked', () => {
+    act(() => {
+      editorStore.getState().run('setCable', { id: 'cable-1', media: 'cat6' });
+      editorStore.getState().run('setCable', { id: 'cable-2', media: 'cat6a', label: 'HR-A-07' });
+    });
+    render(<CanvasScene width={800} height={600} label="Diagram" />);
+    const tagText = (id: string) => String(screen.UNSAFE_getByProps({ testID: `cable-tag-${id}` }).props['aria-label']);
+    // Not by colour or width alone: the tag names the category (TIA-568 Category 6 and 6A).
+    expect(tagText('cable-1')).toMatch(/^tag (. · )?6$/);
+    expect(tagText('cable-2')).toMatch(/^tag (. · )?6A$/);
+    act(() => canvasUiStore.setState({ cableTags: 'label' }));
+    expect(tagText('cable-2')).toBe('tag HR-A-07');
+    expect(tagText('cable-1')).toMatch(/^tag C\d+$/);
   });
 });

@@ -20,7 +20,7 @@ const V2 = versionSummary({ number: 2, doc: docs.v2, message: 'cam-rec-2 on both
 function renderDesign(user: User, width: number, selected: number | null = null, onSelect = jest.fn()) {
   dimensions.mockReturnValue({ width, height: 900, scale: 1, fontScale: 1 });
   get.mockImplementation(async (path: string) => {
-    if (path === '/api/designs/1') return designResponse([V2, V1], { status: 'changes-requested' });
+    if (path === '/api/designs/1') return designResponse([V2, V1], { status: 'changes-requested', approvedVersion: null });
     throw new Error(`unexpected request ${path}`);
   });
   renderWithClient(<DesignScreen id={1} selected={selected} onSelect={onSelect} />, { user });
@@ -42,6 +42,37 @@ describe('design screen', () => {
     expect(within(list).getByTestId('version-1-state')).toHaveTextContent('Changes asked');
     expect(within(list).getByTestId('version-2-state')).toHaveTextContent('Draft');
     expect(screen.getByTestId('version-panel')).toHaveTextContent(/Version 2 \(latest\)/);
+  });
+
+  it('heads a design whose approved version 3 is followed by a draft 4 with both', async () => {
+    const V3 = versionSummary({ number: 3, doc: docs.v2, state: 'approved', message: 'Spare port labelled', events: [event(3, 'submit', people.designer), event(4, 'approve', people.reviewer)] });
+    const V4 = versionSummary({ number: 4, doc: docs.v2, message: 'Next step' });
+    dimensions.mockReturnValue({ width: 390, height: 844, scale: 1, fontScale: 1 });
+    get.mockImplementation(async (path: string) => {
+      if (path === '/api/designs/1') return designResponse([V4, V3, V2, V1], { status: 'approved', approvedVersion: { number: 3, approvedAt: V3.createdAt } });
+      throw new Error(`unexpected request ${path}`);
+    });
+    renderWithClient(<DesignScreen id={1} selected={null} onSelect={jest.fn()} />, { user: people.designer });
+    const status = await screen.findByTestId('design-status');
+    expect(status.props['aria-label']).toBe('Approved v3 · draft v4');
+    expect(status).toHaveTextContent('Approved v3·draft v4');
+  });
+
+  it('offers a blank design’s editor first, and a file second', async () => {
+    dimensions.mockReturnValue({ width: 390, height: 844, scale: 1, fontScale: 1 });
+    get.mockImplementation(async (path: string) => {
+      if (path === '/api/designs/1') return designResponse([], { status: 'draft', approvedVersion: null });
+      throw new Error(`unexpected request ${path}`);
+    });
+    renderWithClient(<DesignScreen id={1} selected={null} onSelect={jest.fn()} />, { user: people.designer });
+    const empty = await screen.findByTestId('design-no-versions');
+    expect(empty).toHaveTextContent(/^No versions yetDraw this design on the canvas/);
+    const actions = within(empty).getAllByRole('button').map((b) => b.props.testID);
+    expect(actions).toEqual(['design-no-versions-edit', 'design-no-versions-upload']);
+    expect(screen.getByTestId('design-status').props['aria-label']).toBe('Draft');
+    expect(screen.queryByTestId('design-edit')).toBeNull(); // offered once, in the empty state
+    fireEvent.press(screen.getByTestId('design-no-versions-upload'));
+    expect(await screen.findByTestId('upload-file-pick')).toBeOnTheScreen();
   });
 
   it('opens the picked version in the detail panel with its review thread', async () => {

@@ -20,6 +20,7 @@ function listItem(id: number, name: string, status: DesignListItem['status'], n:
     site: 'Harbor Road server room',
     status,
     latestVersion: latest && { number: latest.number, createdAt: latest.createdAt, summary: latest.summary, review: status },
+    approvedVersion: status === 'approved' && latest ? { number: latest.number, approvedAt: '2026-11-26T15:00:00.000Z' } : null,
     updatedAt: '2026-11-26T15:00:00.000Z',
   };
 }
@@ -51,8 +52,8 @@ describe('designs screen', () => {
     serve([HARBOR, FLAWED, EMPTY]);
     renderList(people.designer);
     const list = await screen.findByTestId('designs-list');
-    expect(within(list).getByTestId('design-1-status')).toHaveTextContent('Approved');
-    expect(within(list).getByTestId('design-2-status')).toHaveTextContent('Changes asked');
+    expect(within(list).getByTestId('design-1-status')).toHaveTextContent('Approved v2');
+    expect(within(list).getByTestId('design-2-status')).toHaveTextContent('Changes asked v1');
     expect(within(list).getByTestId('design-3-status')).toHaveTextContent('Draft');
     // product.md: version 2 makes all six hosts redundant; version 1 leaves cam-rec-2 with single points.
     expect(within(list).getByTestId('design-1-latest')).toHaveTextContent(/Version 2.*6 of 6 hosts redundant · no errors/);
@@ -62,6 +63,22 @@ describe('designs screen', () => {
     );
     expect(within(list).getByTestId('design-3-latest')).toHaveTextContent('No versions yet');
     expect(screen.queryByTestId('designs-table')).toBeNull();
+  });
+
+  it('says both when a draft follows an approved version: “Approved v3 · draft v4”, on a phone and in the table', async () => {
+    const base = listItem(4, 'Harbor Road storage', 'approved', 4);
+    const next: DesignListItem = { ...base, latestVersion: { ...base.latestVersion!, review: 'draft' }, approvedVersion: { number: 3, approvedAt: '2026-11-27T10:00:00.000Z' } };
+    serve([next, HARBOR]);
+    renderList(people.designer);
+    const list = await screen.findByTestId('designs-list');
+    expect(within(list).getByTestId('design-4-status')).toHaveTextContent('Approved v3·draft v4');
+    expect(within(list).getByTestId('design-4-status').props['aria-label']).toBe('Approved v3 · draft v4');
+    // The approved version that is also the latest says so once.
+    expect(within(list).getByTestId('design-1-status').props['aria-label']).toBe('Approved v2');
+    screen.unmount();
+    renderList(people.designer, 1440);
+    const table = await screen.findByTestId('designs-table');
+    expect(within(table).getByTestId('design-4-status').props['aria-label']).toBe('Approved v3 · draft v4');
   });
 
   it('uses a table on a wide screen', async () => {

@@ -1,9 +1,9 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { NewDesignScreen } from '@/components/designs/NewDesignScreen';
 import { api, ApiRequestError } from '@/lib/api/client';
-import { buildCreateBody, DEFAULT_PATTERN_VALUES } from '@/lib/designs/new-design';
+import { buildCreateBody, DEFAULT_PATTERN_VALUES, PATTERN_HINTS } from '@/lib/designs/new-design';
 import { readTopologyText, type ImportResult } from '@/lib/import';
-import { dualFabric, dualFabricWithManagement } from '@/shared/patterns';
+import { dualFabric, dualFabricWithManagement, PATTERNS } from '@/shared/patterns';
 import { validateTopology } from '@/shared/topology/validate';
 import { docs, harborDesign, people } from './helpers';
 import { renderWithClient } from '../helpers/render';
@@ -132,6 +132,17 @@ describe('new design form', () => {
     expect(issues).toHaveTextContent(/must not be empty/);
   });
 
+  it('explains an out-of-range pattern number under its field as soon as it is typed', () => {
+    renderForm();
+    fireEvent.changeText(screen.getByTestId('new-design-cards'), '5');
+    // Before anything is sent: the field says why, and no preview of a design that cannot be built.
+    expect(screen.getByTestId('new-design-cards-error')).toHaveTextContent('At most 4 cards per host');
+    expect(screen.queryByTestId('new-design-preview')).toBeNull();
+    fireEvent.changeText(screen.getByTestId('new-design-cards'), '3');
+    expect(screen.queryByTestId('new-design-cards-error')).toBeNull();
+    expect(post).not.toHaveBeenCalled();
+  });
+
   it('creates a blank design without a document', async () => {
     post.mockResolvedValueOnce({ design: { ...harborDesign, id: 9 }, version: null });
     renderForm();
@@ -145,6 +156,10 @@ describe('new design form', () => {
 // The request the form sends, built without rendering (lib/forms reaches the API client, which needs the Expo preset).
 describe('new design request', () => {
   const base = { name: 'Pier 4', site: '', message: '', start: 'pattern' as const, pattern: DEFAULT_PATTERN_VALUES, imported: null };
+
+  it('describes each pattern with the shared patterns’ own sentence', () => {
+    for (const pattern of PATTERNS) expect(PATTERN_HINTS[pattern.id]).toBe(pattern.about);
+  });
 
   it('builds the pattern document the shared patterns give for the same options', () => {
     const built = buildCreateBody({ ...base, pattern: { ...DEFAULT_PATTERN_VALUES, hosts: '5' } });

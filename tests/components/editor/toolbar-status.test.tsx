@@ -9,10 +9,10 @@ import type { Topology } from '@/shared/topology/schema';
 
 const noop = () => {};
 
-function renderToolbar(doc: Topology, baseVersion: number) {
+function renderToolbar(doc: Topology, baseVersion: number, approvedVersion: number | null = null) {
   editorStore.getState().load(doc, { designId: 1, baseVersion });
   analyseNow(liveAnalysisStore, doc);
-  renderWithClient(<EditorToolbar wide view="canvas" onView={noop} onBack={noop} onSave={noop} onHelp={noop} onAdd={noop} onFindings={noop} paletteOpen />);
+  renderWithClient(<EditorToolbar wide view="canvas" onView={noop} onBack={noop} onSave={noop} onHelp={noop} onAdd={noop} onFindings={noop} paletteOpen approvedVersion={approvedVersion} />);
 }
 
 describe('the editor status line', () => {
@@ -37,5 +37,13 @@ describe('the editor status line', () => {
       analyseNow(liveAnalysisStore, editorStore.getState().doc);
     });
     expect(screen.getByTestId('editor-status')).toHaveTextContent(/0 problems, 1 warning$/);
+  });
+
+  it('says which version is approved when a newer one is open, and when the open one is it', () => {
+    renderToolbar(harborRoadV2(), 4, 3);
+    expect(screen.getByTestId('editor-status')).toHaveTextContent(/^Saved · version 4 · approved v3 · 0 problems$/);
+    screen.unmount();
+    renderToolbar(harborRoadV2(), 3, 3);
+    expect(screen.getByTestId('editor-status')).toHaveTextContent(/^Saved · version 3, approved · 0 problems$/);
   });
 });

@@ -26,19 +26,22 @@ describe('the inspector', () => {
     expect(screen.getByTestId('inspector-name').props.value).toBe('wms-db-1');
   });
 
-  it('refuses an initiator name that breaks the iSCSI rules, with the rule’s sentence, and keeps the old one', () => {
+  it('keeps an initiator name that breaks the iSCSI rules, and names every wrong character, as typed and as a finding', () => {
     open();
     act(() => editorStore.getState().select(['cam-rec-1']));
     render(<Inspector />);
-    const before = device('cam-rec-1');
-    // RFC 7143 §4.2.7.4: the date is YYYY-MM with a month 01–12.
+    // RFC 7143 §4.2.7.4: the date is YYYY-MM with a month 01–12; explained while it is typed.
     fireEvent.changeText(screen.getByTestId('inspector-iqn'), 'iqn.2026-13.example.tidewater:cam-rec-1');
     expect(screen.getByTestId('inspector-iqn-error')).toHaveTextContent('Not a valid iSCSI name: the month "13" is not 01–12.');
+    // RFC 3722 §6: "_" and spaces are prohibited; the name is kept all the same, as a draft may be.
+    const bad = 'iqn.2026-01.example.tidewater:cam rec_1';
+    fireEvent.changeText(screen.getByTestId('inspector-iqn'), bad);
     fireEvent(screen.getByTestId('inspector-iqn'), 'blur');
-    expect(device('cam-rec-1')).toBe(before);
-    fireEvent.changeText(screen.getByTestId('inspector-iqn'), 'iqn.2026-01.example.tidewater:cam-rec-1b');
-    fireEvent(screen.getByTestId('inspector-iqn'), 'blur');
-    expect(device('cam-rec-1').kind === 'host' && device('cam-rec-1')).toMatchObject({ iqn: 'iqn.2026-01.example.tidewater:cam-rec-1b' });
+    expect(device('cam-rec-1')).toMatchObject({ iqn: bad });
+    act(() => analyseNow(liveAnalysisStore, editorStore.getState().doc));
+    const finding = liveAnalysisStore.getState().report!.findings.find((f) => f.rule === 'iqn-invalid' && f.subjects.includes('cam-rec-1'))!;
+    expect(finding.message).toContain('a space and "_"');
+    expect(screen.getByTestId('inspector-iqn-error')).toHaveTextContent(finding.message);
   });
 
   it('sets the CHAP mode of the design and says the secrets are not stored, with the RFC’s lengths', () => {

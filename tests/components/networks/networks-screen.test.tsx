@@ -26,6 +26,17 @@ describe('networks and addresses', () => {
     expect(doc().networks.map((n) => [n.name, n.cidr, n.vlan])).toContainEqual(['fabric C', '2001:db8:c::/64', 130]);
   });
 
+  it('never says OK beside an address that is in error while it is typed', () => {
+    render(<NetworksScreen wide />);
+    const port = 'wms-db-1.card-1.p1';
+    expect(screen.getByTestId(`address-status-${port}`)).toHaveTextContent('OK');
+    fireEvent.changeText(screen.getByTestId(`address-ip-${port}`), '198.51.100.x');
+    expect(screen.getByTestId(`address-status-${port}`)).not.toHaveTextContent(/OK/);
+    expect(screen.getByTestId(`address-status-${port}`)).toHaveTextContent('Not saved: fix the address first');
+    fireEvent.changeText(screen.getByTestId(`address-ip-${port}`), '198.51.100.21');
+    expect(screen.getByTestId(`address-status-${port}`)).toHaveTextContent('OK');
+  });
+
   it('saves a VLAN outside 1–4094 and shows the analysis’s finding under the field', () => {
     render(<NetworksScreen wide />);
     const id = doc().networks[0].id;

@@ -70,6 +70,8 @@ describe('failure report', () => {
     renderReport(1);
     const errors = await screen.findByTestId('report-findings-error');
     expect(within(errors).getByTestId('report-finding-management-port-on-data-switch')).toHaveTextContent(/ctl-b mgmt/);
+    // The finding is headed in words; the rule id stays only as the small code beside it.
+    expect(within(errors).getByTestId('report-finding-management-port-on-data-switch-title')).toHaveTextContent('Management port on a data switch');
     expect(within(errors).getAllByTestId('report-finding-single-point-of-failure').length).toBeGreaterThan(0);
   });
 

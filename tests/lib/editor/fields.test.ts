@@ -1,5 +1,5 @@
 import { checkIscsiName } from '@/shared/rules/iqn';
-import { cidrField, iqnField, ipField, lengthField, mtuField, nameField, parseField, ruField, versionMessageField, vlanField } from '@/lib/editor/fields';
+import { cidrField, iqnAdvice, iqnField, ipField, lengthField, mtuField, nameField, parseField, ruField, versionMessageField, vlanField } from '@/lib/editor/fields';
 
 const ok = <T,>(result: { ok: true; value: T } | { ok: false; message: string }) => (result.ok ? result.value : `refused: ${result.message}`);
 
@@ -13,13 +13,18 @@ describe('inspector fields', () => {
     expect(ok(parseField(iqnField, '  '))).toBeNull();
   });
 
-  it('refuses a bad initiator name with the analysis rule’s own reason', () => {
-    // RFC 7143 §4.2.7.4: the month is 01–12.
-    expect(ok(parseField(iqnField, 'iqn.2001-13.com.example'))).toBe('refused: Not a valid iSCSI name: the month "13" is not 01–12.');
-    // RFC 7143 §4.2.7.2: "_" is not allowed; the sentence is the shared rule's reason, word for word.
-    const check = checkIscsiName('iqn.2001-04.com.ex_ample');
+  it('keeps a bad initiator name for the analysis to report, and explains it as it is typed', () => {
+    // RFC 7143 §4.2.7.4: the month is 01–12; a draft may hold a wrong one, reported as iqn-invalid.
+    expect(ok(parseField(iqnField, 'iqn.2001-13.com.example'))).toBe('iqn.2001-13.com.example');
+    // RFC 7143 §4.2.7.2: "_" and spaces are not allowed; the advice is the shared rule's reason, word for word.
+    const check = checkIscsiName('iqn.2001-04.com.ex_ample:a b');
     expect(check.ok).toBe(false);
-    expect(ok(parseField(iqnField, 'iqn.2001-04.com.ex_ample'))).toBe(`refused: Not a valid iSCSI name: ${check.ok ? '' : check.reason}.`);
+    expect(ok(parseField(iqnField, 'iqn.2001-04.com.ex_ample:a b'))).toBe('iqn.2001-04.com.ex_ample:a b');
+    expect(iqnAdvice('iqn.2001-04.com.ex_ample:a b')).toBe(`Not a valid iSCSI name: ${check.ok ? '' : check.reason}.`);
+    expect(iqnAdvice('iqn.2001-04.com.example')).toBeNull(); // RFC 7143 §4.2.7.4 example
+    expect(iqnAdvice('')).toBeNull();
+    // The document's own limit still refuses a name no iSCSI name could be (RFC 7143 §4.2.7.1: 223 bytes).
+    expect(ok(parseField(iqnField, 'x'.repeat(1001)))).toMatch(/^refused: /);
   });
 
   it('keeps a VLAN or MTU out of range for the analysis to report, but refuses text that is not a number', () => {

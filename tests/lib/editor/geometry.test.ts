@@ -4,6 +4,8 @@ import {
   clampZoom,
   devicePorts,
   devicesInRect,
+  fitPadding,
+  FIT_MAX_ZOOM,
   fitToBounds,
   groupBox,
   hitTest,
@@ -22,6 +24,7 @@ import {
   worldToScreen,
   zoomAbout,
 } from '@/lib/editor/geometry';
+import { harborRoadV2 } from '@/shared/fixtures/harbor-road';
 import { moveDevice } from '@/lib/editor/commands';
 import { apply, smallDesign } from '@/tests/lib/editor/helpers/editor';
 import { bigDesign } from '@/tests/lib/editor/helpers/big-design';
@@ -212,6 +215,16 @@ describe('viewport math', () => {
     expect(fit.zoom).toBeCloseTo(920 / 2000, 9);
     expect(fitToBounds({ x: 0, y: 0, width: 10, height: 10 }, screen).zoom).toBe(1);
     expect(centreOn(fit, { x: 1000, y: 500 }, screen)).toEqual(fit);
+  });
+
+  it('fills a phone with the demo drawing and enlarges a small drawing, as the canvas fits them', () => {
+    const demo = buildSnapshot(harborRoadV2()).bounds!;
+    const phone = { width: 390, height: 700 };
+    const fit = fitToBounds(demo, phone, fitPadding(phone), FIT_MAX_ZOOM);
+    expect((demo.width * fit.zoom) / phone.width).toBeGreaterThan(0.9);
+    const wide = { width: 1100, height: 800 };
+    expect(fitPadding(wide)).toBe(40);
+    expect(fitToBounds({ x: 0, y: 0, width: 300, height: 200 }, wide, fitPadding(wide), FIT_MAX_ZOOM).zoom).toBe(1.5);
   });
 
   it('snaps points to the grid', () => {
