@@ -1,3 +1,4 @@
+import { poolAnalysis } from './analysis';
 import { createAuthService } from './auth';
 import type { ServiceDeps } from './deps';
 import { createDesignServices } from './designs';
@@ -10,7 +11,7 @@ export function createServices(deps: ServiceDeps) {
     auth: createAuthService(deps),
     team: createTeamService(deps),
     invitations: createInvitationService(deps),
-    ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date() }),
+    ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis: poolAnalysis(deps.config.analysis) }),
   };
 }
 

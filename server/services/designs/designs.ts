@@ -5,11 +5,11 @@ import { writeTransaction, type DesignDeps, type Within } from './deps';
 import { toDesignDto, toListItem, toVersionSummary } from './dto';
 import { loadDesignView, loadDesignViews } from './load';
 import { DEFAULT_FIRST_MESSAGE, NO_SUCH_DESIGN } from './messages';
-import { appendVersion, prepareDocument, type PreparedDocument } from './write';
+import { appendVersion, type PreparedDocument } from './write';
 
 /** The team's designs: list, read one with its versions, create one (optionally with version 1). */
 export function createDesignService(deps: DesignDeps) {
-  const { models, now } = deps;
+  const { models, now, analysis } = deps;
 
   return {
     /**
@@ -37,7 +37,7 @@ export function createDesignService(deps: DesignDeps) {
     async create(viewer: User, body: CreateDesignBody, within: Within = {}): Promise<Result<CreateDesignResponse>> {
       let prepared: PreparedDocument | null = null;
       if (body.document !== undefined) {
-        const result = prepareDocument(body.document);
+        const result = await analysis.prepare(body.document);
         if (!result.ok) return result;
         prepared = result.value;
       }
