@@ -24,8 +24,12 @@ export type PoolOptions = {
   queueMax: number;
 };
 
-/** Why a task did not finish: `time` and `memory` are the limits, `stopped` anything else that ended its process. */
-export type LimitKind = 'time' | 'memory' | 'stopped' | 'busy';
+/**
+ * Why a task did not finish: `time` and `memory` are the limits; `tampered`: the task changed the
+ * process' built-in objects (see child.cjs), so its answer was withheld and the process replaced;
+ * `stopped`: anything else that ended its process; `busy`: the queue was full.
+ */
+export type LimitKind = 'time' | 'memory' | 'tampered' | 'stopped' | 'busy';
 
 export class PoolLimitError extends Error {
   constructor(
@@ -45,7 +49,8 @@ export type Pool = {
 };
 
 type Job = { id: number; task: string; input: unknown; resolve: (value: unknown) => void; reject: (error: Error) => void };
-type Slot = { child: ChildProcess; ready: boolean; job: Job | null; timer: NodeJS.Timeout | null; timedOut: boolean; stderr: string };
+/** `retiring`: it answered its last task and is exiting; no task goes to it. */
+type Slot = { child: ChildProcess; ready: boolean; retiring: boolean; job: Job | null; timer: NodeJS.Timeout | null; timedOut: boolean; stderr: string };
 
 const CHILD = path.join(__dirname, 'child.cjs');
 const ROOT = path.resolve(__dirname, '..', '..');
@@ -66,13 +71,13 @@ export function createPool(options: PoolOptions): Pool {
       serialization: 'advanced',
       stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
     });
-    const slot: Slot = { child, ready: false, job: null, timer: null, timedOut: false, stderr: '' };
+    const slot: Slot = { child, ready: false, retiring: false, job: null, timer: null, timedOut: false, stderr: '' };
     slots.add(slot);
     child.stderr?.setEncoding('utf8');
     child.stderr?.on('data', (chunk: string) => {
       slot.stderr = (slot.stderr + chunk).slice(-STDERR_KEPT);
     });
-    child.on('message', (message: { ready?: true; id?: number; result?: unknown; error?: string }) => {
+    child.on('message', (message: { ready?: true; id?: number; result?: unknown; error?: string; tampered?: true }) => {
       if (message.ready) {
         slot.ready = true;
         idle(slot);
@@ -82,7 +87,11 @@ export function createPool(options: PoolOptions): Pool {
       const job = slot.job;
       if (!job || message.id !== job.id) return;
       finish(slot);
-      if (message.error !== undefined) job.reject(new Error(message.error));
+      if (message.tampered) {
+        // The child exits by itself and is replaced then; until it has, no task goes to it.
+        slot.retiring = true;
+        job.reject(new PoolLimitError('tampered', 'the task changed built-in objects of its process'));
+      } else if (message.error !== undefined) job.reject(new Error(message.error));
       else job.resolve(message.result);
       pump();
     });
@@ -138,7 +147,7 @@ export function createPool(options: PoolOptions): Pool {
 
   function pump(): void {
     while (queue.length > 0 && !closed) {
-      const free = [...slots].find((s) => s.ready && !s.job);
+      const free = [...slots].find((s) => s.ready && !s.retiring && !s.job);
       if (free) {
         dispatch(free, queue.shift()!);
         continue;

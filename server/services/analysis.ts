@@ -27,9 +27,14 @@ const TASKS_MODULE = path.join(__dirname, '..', 'analysis', 'tasks.ts');
 /** Saves waiting for a free analysis process, beyond which the server says it is busy. */
 const QUEUE_MAX = 50;
 
+/** The process-wide pool of analysis processes for these limits (shared by every app in the process). */
+export function analysisPool(limits: Config['analysis']): Pool {
+  return sharedPool({ module: TASKS_MODULE, ...limits, queueMax: QUEUE_MAX });
+}
+
 /** The analysis of the running server: the process-wide pool with the configured limits. */
 export function poolAnalysis(limits: Config['analysis']): Analysis {
-  const pool = sharedPool({ module: TASKS_MODULE, ...limits, queueMax: QUEUE_MAX });
+  const pool = analysisPool(limits);
   return {
     prepare: (document) => runTask(pool, limits, 'prepare', JSON.stringify(document), 'it was not saved'),
     prepareJson: (documentJson) => runTask(pool, limits, 'prepare', documentJson, 'it was not saved'),
@@ -75,6 +80,10 @@ function limitFailure(error: PoolLimitError, limits: Config['analysis'], consequ
       return fail('busy', 'The server is busy analysing other designs. Try again in a moment.');
     case 'time':
       return unprocessable(`The analysis of this document took longer than the ${seconds(limits.timeoutMs)} the server allows, so ${consequence}. ${fix}`);
+    case 'tampered':
+      return unprocessable(
+        `The analysis of this document was stopped because some of its ids (such as __proto__ or constructor) disturb the analysis, so ${consequence}. Rename those ids and try again.`,
+      );
     case 'memory':
       return unprocessable(`The analysis of this document needed more than the ${limits.maxOldMb} MB of memory the server allows, so ${consequence}. ${fix}`);
     default:

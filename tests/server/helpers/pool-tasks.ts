@@ -14,8 +14,17 @@ function grow(): never {
   for (;;) items.push(items.length);
 }
 
+/** Write through `__proto__` onto Object.prototype, as code that keys plain objects by user ids can. */
+function pollute(key: string): boolean {
+  const index: Record<string, Record<string, boolean>> = {};
+  index['__proto__'][key] = true;
+  return true;
+}
+
 export const TASKS = new Map<string, (input: never) => unknown>([
   ['echo', (input: unknown) => ({ echoed: input, pid: process.pid })],
+  ['pollute', pollute],
+  ['inherits', (key: string) => key in {}],
   ['spin', spin],
   ['grow', grow],
   ['throw', () => {
