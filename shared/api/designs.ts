@@ -28,7 +28,34 @@ export const versionParams = z
   .object({ id: z.coerce.number().int().positive(), n: z.coerce.number().int().positive() })
   .strict();
 export const diffQuery = z.object({ against: z.coerce.number().int().positive() }).strict();
-export const designListQuery = z.object({ q: z.string().max(120).optional() }).strict();
+/** How many designs one page of GET /api/designs holds at most, unless `limit` says fewer. */
+export const DESIGN_PAGE_SIZE = 50;
+export const MAX_DESIGN_PAGE_SIZE = 100;
+
+/** A position in the designs list (most recently changed first): after the design changed at `updatedAt` with `id`. */
+export type DesignCursor = { updatedAt: number; id: number };
+
+/** Cursors are `<updatedAt in ms>.<id>`; clients pass back the `nextCursor` they were given and never build one. */
+export function encodeDesignCursor(cursor: DesignCursor): string {
+  return `${cursor.updatedAt}.${cursor.id}`;
+}
+
+const designCursor = z
+  .string()
+  .regex(/^\d{1,15}\.\d{1,15}$/, 'Use the nextCursor of the previous page')
+  .transform((value): DesignCursor => {
+    const [updatedAt, id] = value.split('.').map(Number);
+    return { updatedAt, id };
+  });
+
+export const designListQuery = z
+  .object({
+    q: z.string().max(120).optional(),
+    limit: z.coerce.number().int().min(1).max(MAX_DESIGN_PAGE_SIZE, `Ask for at most ${MAX_DESIGN_PAGE_SIZE} designs at a time`).default(DESIGN_PAGE_SIZE),
+    cursor: designCursor.optional(),
+  })
+  .strict();
+export type DesignListQuery = z.infer<typeof designListQuery>;
 
 export const createDesignBody = z
   .object({ name: designName, site: site.optional(), document: z.unknown().optional(), message: message.optional() })
@@ -88,13 +115,19 @@ export type DesignListItem = {
   status: DesignStatus;
   /** The newest version the caller may see (installers: the newest approved one), or null. */
   latestVersion: { number: number; createdAt: string; summary: ReportSummary; review: ReviewState } | null;
+  /** The newest approved version and when it was approved, or null; a newer draft never hides it. */
+  approvedVersion: { number: number; approvedAt: string } | null;
   updatedAt: string;
 };
 
-export type DesignDto = Omit<DesignListItem, 'latestVersion'> & { createdAt: string; createdBy: Person | null };
+export type DesignDto = DesignListItem & { createdAt: string; createdBy: Person | null };
 
-/** GET /api/designs — the caller's team's designs, most recently changed first. */
-export type DesignsResponse = { designs: DesignListItem[] };
+/**
+ * GET /api/designs?q=&limit=&cursor= — one page of the caller's team's designs, most recently changed
+ * first. `nextCursor` asks for the page after this one (null on the last page); `total` counts every
+ * design matching `q` that the caller may see.
+ */
+export type DesignsResponse = { designs: DesignListItem[]; nextCursor: string | null; total: number };
 /**
  * GET /api/designs/:id — `versions` newest first, without documents. For installers: only approved
  * versions, `design.status` is "approved", and a design with no approved version answers 404.

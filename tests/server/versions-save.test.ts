@@ -69,9 +69,12 @@ describe('listing and searching designs', () => {
         site: 'Harbor Road server room',
         status: 'approved',
         latestVersion: { number: 2, createdAt: expect.any(String), summary: expect.objectContaining({ errors: 0 }), review: 'approved' },
+        approvedVersion: { number: 2, approvedAt: expect.any(String) },
         updatedAt: expect.any(String),
       },
     ]);
+    expect(res.body.nextCursor).toBeNull();
+    expect(res.body.total).toBe(1);
   });
 
   it('matches q against name or site, ignoring case, and treats % and _ as plain characters', async () => {

@@ -64,16 +64,13 @@ function statusFor(viewer: User, status: DesignStatus): DesignStatus {
 export function toDesignDto(view: DesignView, viewer: User): DesignDto {
   const { design } = view;
   return {
-    id: design.id,
-    name: design.name,
-    site: design.site,
-    status: statusFor(viewer, design.status),
-    updatedAt: design.updatedAt.toISOString(),
+    ...toListItem(view, viewer),
     createdAt: design.createdAt.toISOString(),
     createdBy: design.createdById === null ? null : toPerson(view.people, design.createdById),
   };
 }
 
+/** A design as the list shows it, from a loaded view (the list itself is read by list.ts in one query). */
 export function toListItem(view: DesignView, viewer: User): DesignListItem {
   const { design } = view;
   const [latest] = view.versions;
@@ -90,6 +87,14 @@ export function toListItem(view: DesignView, viewer: User): DesignListItem {
           review: latest.state,
         }
       : null,
+    approvedVersion: approvedVersion(view),
     updatedAt: design.updatedAt.toISOString(),
   };
+}
+
+/** The newest approved version (versions are newest first) and the time of its approval. */
+function approvedVersion(view: DesignView): DesignListItem['approvedVersion'] {
+  const approved = view.versions.find((v) => v.state === 'approved');
+  const event = approved && [...approved.events].reverse().find((e) => e.action === 'approve');
+  return approved && event ? { number: approved.row.number, approvedAt: event.createdAt.toISOString() } : null;
 }

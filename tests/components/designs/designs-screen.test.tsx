@@ -20,6 +20,7 @@ function listItem(id: number, name: string, status: DesignListItem['status'], n:
     site: 'Harbor Road server room',
     status,
     latestVersion: latest && { number: latest.number, createdAt: latest.createdAt, summary: latest.summary, review: status },
+    approvedVersion: latest && status === 'approved' ? { number: latest.number, approvedAt: '2026-11-26T15:00:00.000Z' } : null,
     updatedAt: '2026-11-26T15:00:00.000Z',
   };
 }
@@ -33,7 +34,8 @@ function serve(designs: DesignListItem[]) {
     if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [], invitations: [] };
     if (path.startsWith('/api/designs')) {
       const q = new URLSearchParams(path.split('?')[1] ?? '').get('q');
-      return { designs: q ? designs.filter((d) => d.name.toLowerCase().includes(q.toLowerCase())) : designs };
+      const matching = q ? designs.filter((d) => d.name.toLowerCase().includes(q.toLowerCase())) : designs;
+      return { designs: matching, nextCursor: null, total: matching.length };
     }
     throw new Error(`unexpected request ${path}`);
   });
