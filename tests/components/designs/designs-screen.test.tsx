@@ -96,6 +96,23 @@ describe('designs screen', () => {
     expect(screen.getByTestId('designs-count')).toHaveTextContent('1 matching “annex”');
   });
 
+  it('counts every design, shows the first page, and loads the next page on request', async () => {
+    get.mockImplementation(async (path: string) => {
+      if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [], invitations: [] };
+      if (path === '/api/designs') return { designs: [HARBOR, FLAWED], nextCursor: '1764650000000.2', total: 3 };
+      if (path === '/api/designs?cursor=1764650000000.2') return { designs: [EMPTY], nextCursor: null, total: 3 };
+      throw new Error(`unexpected request ${path}`);
+    });
+    renderList(people.designer);
+    await screen.findByTestId('design-2');
+    expect(screen.getByTestId('designs-count')).toHaveTextContent('3 designs, 2 shown');
+    expect(screen.queryByTestId('design-3')).toBeNull();
+    fireEvent.press(screen.getByTestId('designs-more'));
+    expect(await screen.findByTestId('design-3')).toBeOnTheScreen();
+    expect(screen.getByTestId('designs-count')).toHaveTextContent(/^3 designs$/);
+    expect(screen.queryByTestId('designs-more')).toBeNull();
+  });
+
   it('invites a designer to start the first design when the team has none', async () => {
     serve([]);
     renderList(people.designer);
