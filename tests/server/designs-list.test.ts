@@ -28,9 +28,10 @@ async function readAll(agent: Agent, limit: number): Promise<{ items: Item[]; pa
   let pages = 0;
   do {
     const res = await agent.get('/api/designs').query({ limit, ...(cursor ? { cursor } : {}) }).expect(200);
-    items.push(...res.body.designs);
-    totals.push(res.body.total);
-    cursor = res.body.nextCursor;
+    const body = res.body as { designs: Item[]; total: number; nextCursor: string | null };
+    items.push(...body.designs);
+    totals.push(body.total);
+    cursor = body.nextCursor;
     pages += 1;
   } while (cursor && pages < 100);
   return { items, pages, totals };
@@ -39,7 +40,7 @@ async function readAll(agent: Agent, limit: number): Promise<{ items: Item[]; pa
 /** How many SQL statements one request sends. */
 async function queriesOf(send: () => Promise<unknown>): Promise<number> {
   let count = 0;
-  const options = t.sequelize.options as { logging: unknown };
+  const options = (t.sequelize as unknown as { options: { logging: unknown } }).options;
   const before = options.logging;
   options.logging = () => {
     count += 1;
