@@ -141,14 +141,21 @@ function parseTrustProxy(value: string | undefined, isProduction: boolean, probl
   if (value === undefined) return isProduction ? [] : ['loopback'];
   if (value.toLowerCase() === 'none') return [];
   const entries = value.split(',').map((v) => v.trim()).filter(Boolean);
-  const bad = entries.filter((v) => !PROXY_NAMES.has(v) && !ipaddr.isValid(v) && !isCidr(v));
+  const bad = entries.filter((v) => !PROXY_NAMES.has(v) && !isAddress(v) && !isCidr(v));
   if (bad.length > 0) {
     problems.push(`TRUST_PROXY: ${bad.join(', ')} is not an address, a CIDR range or one of loopback, linklocal, uniquelocal`);
   }
   return entries;
 }
 
+/** A plain IPv4 (four decimal parts, not the legacy forms such as "1") or IPv6 address. */
+function isAddress(value: string): boolean {
+  return ipaddr.IPv4.isValidFourPartDecimal(value) || ipaddr.IPv6.isValid(value);
+}
+
 function isCidr(value: string): boolean {
+  const [address] = value.split('/');
+  if (!isAddress(address)) return false;
   try {
     ipaddr.parseCIDR(value);
     return true;

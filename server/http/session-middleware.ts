@@ -30,7 +30,8 @@ export function sessionMiddleware(sequelize: Sequelize, config: Config): Request
     store,
     resave: false,
     saveUninitialized: false,
-    proxy: config.isProduction,
+    // The app's `trust proxy` (TRUST_PROXY) decides whether X-Forwarded-Proto says the request was HTTPS.
+    proxy: undefined,
     cookie: {
       httpOnly: true,
       sameSite: 'lax',

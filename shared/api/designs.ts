@@ -3,6 +3,7 @@ import type { ReportSummary } from '../analysis/summary';
 import type { Report } from '../analysis/types';
 import type { TopologyDiff } from '../diff/types';
 import type { Topology } from '../topology/schema';
+import { cleanText } from '../text/clean';
 
 /**
  * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
@@ -19,9 +20,20 @@ export type ReviewState = DesignStatus;
 export const REVIEW_ACTIONS = ['submit', 'approve', 'request-changes'] as const;
 export type ReviewAction = (typeof REVIEW_ACTIONS)[number];
 
-const designName = z.string().trim().min(1, 'Give the design a name').max(120, 'Use at most 120 characters');
-const site = z.string().trim().max(120, 'Use at most 120 characters');
-const message = z.string().trim().min(1, 'Say what changed in this version').max(500, 'Use at most 500 characters');
+/**
+ * Names, sites and messages are shown in lists, e-mails and printouts: control and text-direction
+ * characters are taken out first (cleanText), so a name cannot reverse or hide the text after it.
+ * Review comments keep their line breaks; each line is cleaned.
+ */
+const cleaned = () => z.string().transform(cleanText);
+const designName = cleaned().pipe(z.string().trim().min(1, 'Give the design a name').max(120, 'Use at most 120 characters'));
+const site = cleaned().pipe(z.string().trim().max(120, 'Use at most 120 characters'));
+const message = cleaned().pipe(z.string().trim().min(1, 'Say what changed in this version').max(500, 'Use at most 500 characters'));
+
+/** Each line of a multi-line text cleaned on its own, the line breaks kept (CR LF read as LF). */
+export function cleanLines(text: string): string {
+  return text.split(/\r\n|\n|\r/).map(cleanText).join('\n');
+}
 
 export const designIdParams = z.object({ id: z.coerce.number().int().positive() }).strict();
 export const versionParams = z
@@ -77,7 +89,7 @@ export type RestoreBody = z.infer<typeof restoreBody>;
 export const reviewBody = z
   .object({
     action: z.enum(REVIEW_ACTIONS),
-    comment: z.string().trim().max(4000, 'Use at most 4000 characters').optional(),
+    comment: z.string().transform(cleanLines).pipe(z.string().trim().max(4000, 'Use at most 4000 characters')).optional(),
   })
   .strict();
 export type ReviewBody = z.infer<typeof reviewBody>;
