@@ -57,6 +57,26 @@ describe('sign-in', () => {
   });
 });
 
+describe('session expiry', () => {
+  it('moves the stored expiry of a session at most once in ten minutes, not on every request', async () => {
+    const agent = await signInAs(t.app, 'designer');
+    const writes: string[] = [];
+    const options = (t.sequelize as unknown as { options: { logging: unknown } }).options;
+    options.logging = (sql: string) => {
+      if (/^Executing \(default\): UPDATE `sessions`/.test(sql)) writes.push(sql);
+    };
+    try {
+      for (let i = 0; i < 5; i++) await agent.get('/api/auth/me').expect(200);
+    } finally {
+      options.logging = false;
+    }
+    expect(writes.length).toBeLessThanOrEqual(1);
+    const stored = await t.models.Session.findOne({ where: { userId: (await agent.get('/api/auth/me')).body.user.id } });
+    // The session still lasts its 14 days from about now.
+    expect(stored!.expires!.getTime()).toBeGreaterThan(Date.now() + 13.9 * 24 * 60 * 60 * 1000);
+  });
+});
+
 describe('sign-out and who am I', () => {
   it('answers 401 to /me without a session', async () => {
     const res = await request(t.app).get('/api/auth/me');

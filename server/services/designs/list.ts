@@ -8,8 +8,8 @@ import { seesAllVersions } from './load';
 /**
  * One page of the designs list, read with what the list shows and nothing else: per design its
  * latest version (number, date, summary and review state) and its latest approved version (number
- * and approval date), each picked by an indexed subquery, so a page is one query however many
- * versions and review events the team has. A second query counts the matches.
+ * and approval date), each picked by an indexed subquery, and the number of matches: a page is one
+ * query however many versions and review events the team has.
  *
  * A version's review state is its newest event's (review-state.ts). An approval is final (only a
  * version in review can be approved, and nothing moves an approved version on), so "the newest
@@ -20,6 +20,7 @@ import { seesAllVersions } from './load';
  * the matching ids.
  */
 type Row = {
+  total: number;
   id: number;
   name: string;
   site: string | null;
@@ -39,14 +40,23 @@ const APPROVED_VERSION = `(SELECT v."id" FROM "design_versions" v WHERE v."desig
   AND EXISTS (SELECT 1 FROM "review_events" e WHERE e."versionId" = v."id" AND e."action" = 'approve')
   ORDER BY v."number" DESC LIMIT 1)`;
 
-const PAGE_SQL = `SELECT d."id", d."name", d."site", d."status", d."updatedAt",
+/**
+ * The page's ids are picked first (by the (teamId, updatedAt, id) index, migration 0007) and only
+ * those rows get their versions looked up: SQLite evaluates a SELECT list's subqueries for every
+ * row before it sorts, so asking for them on the whole team and then taking 50 would read them all.
+ */
+const pageSql = (where: string, pageWhere: string) => `WITH "page" AS (
+  SELECT d."id" FROM "designs" d WHERE ${pageWhere} ORDER BY d."updatedAt" DESC, d."id" DESC LIMIT :limit
+)
+SELECT (SELECT COUNT(*) FROM "designs" d WHERE ${where}) AS "total", d."id", d."name", d."site", d."status", d."updatedAt",
   lv."number" AS "latestNumber", lv."createdAt" AS "latestCreatedAt", lv."summary" AS "latestSummary",
   (SELECT e."action" FROM "review_events" e WHERE e."versionId" = lv."id" ORDER BY e."id" DESC LIMIT 1) AS "latestAction",
   av."number" AS "approvedNumber", av."createdAt" AS "approvedCreatedAt", av."summary" AS "approvedSummary",
   (SELECT e."createdAt" FROM "review_events" e WHERE e."versionId" = av."id" AND e."action" = 'approve' ORDER BY e."id" DESC LIMIT 1) AS "approvedAt"
-FROM "designs" d
+FROM "page" JOIN "designs" d ON d."id" = "page"."id"
 LEFT JOIN "design_versions" lv ON lv."id" = (SELECT v."id" FROM "design_versions" v WHERE v."designId" = d."id" ORDER BY v."number" DESC LIMIT 1)
-LEFT JOIN "design_versions" av ON av."id" = ${APPROVED_VERSION}`;
+LEFT JOIN "design_versions" av ON av."id" = ${APPROVED_VERSION}
+ORDER BY d."updatedAt" DESC, d."id" DESC`;
 
 export type ListOptions = { q?: string; limit: number; cursor?: DesignCursor };
 
@@ -64,24 +74,24 @@ export async function listDesigns(sequelize: Sequelize, viewer: User, options: L
     replacements.ids = ids;
   }
   const where = filters.join(' AND ');
-  const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS "total" FROM "designs" d WHERE ${where}`, {
-    replacements,
-    type: QueryTypes.SELECT,
-  });
   const page = [...filters];
   if (options.cursor) {
     page.push('(d."updatedAt" < :after OR (d."updatedAt" = :after AND d."id" < :afterId))');
     replacements.after = new Date(options.cursor.updatedAt);
     replacements.afterId = options.cursor.id;
   }
-  const rows = await sequelize.query<Row>(`${PAGE_SQL} WHERE ${page.join(' AND ')} ORDER BY d."updatedAt" DESC, d."id" DESC LIMIT :limit`, {
-    replacements,
-    type: QueryTypes.SELECT,
-  });
+  const rows = await sequelize.query<Row>(pageSql(where, page.join(' AND ')), { replacements, type: QueryTypes.SELECT });
+  // The count rides on the page's rows; a page past the end has none, and is counted on its own.
+  const total = rows.length > 0 ? Number(rows[0].total) : await count(sequelize, where, replacements);
   const shown = rows.slice(0, options.limit);
   const last = shown[shown.length - 1];
   const nextCursor = rows.length > options.limit && last ? encodeDesignCursor({ updatedAt: asDate(last.updatedAt).getTime(), id: last.id }) : null;
-  return { designs: shown.map((row) => toItem(row, all)), nextCursor, total: Number(total) };
+  return { designs: shown.map((row) => toItem(row, all)), nextCursor, total };
+}
+
+async function count(sequelize: Sequelize, where: string, replacements: Record<string, unknown>): Promise<number> {
+  const [row] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS "total" FROM "designs" d WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
+  return Number(row.total);
 }
 
 async function matchingIds(sequelize: Sequelize, teamId: number, needle: string): Promise<number[]> {
