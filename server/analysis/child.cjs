@@ -63,4 +63,18 @@ process.on('message', (message) => {
 });
 
 process.on('disconnect', () => process.exit(0));
+
+/**
+ * A task stuck in a loop never gets to the 'disconnect' event, so a server killed outright (kill -9)
+ * would leave it spinning. A watchdog thread, which the loop cannot block, ends this process once
+ * its parent is gone (its parent process id changes).
+ */
+const { Worker } = require('node:worker_threads');
+const watchdog = new Worker(
+  `const { workerData } = require('node:worker_threads');
+   setInterval(() => { if (process.ppid !== workerData.parent) process.kill(workerData.self, 'SIGKILL'); }, 500);`,
+  { eval: true, workerData: { parent: process.ppid, self: process.pid } },
+);
+watchdog.unref();
+
 process.send({ ready: true });

@@ -1,3 +1,4 @@
+import { fork } from 'node:child_process';
 import path from 'node:path';
 import { createPool, PoolLimitError, type Pool } from '@/server/analysis/pool';
 
@@ -23,6 +24,16 @@ async function failure(run: Promise<unknown>): Promise<PoolLimitError | Error> {
 }
 
 type Echo = { echoed: unknown; pid: number };
+
+/** Whether a process with this id still runs (signal 0 only checks). */
+function alive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 describe('the analysis process pool', () => {
   it('runs a task in another process and answers its result', async () => {
@@ -81,6 +92,17 @@ describe('the analysis process pool', () => {
     expect((refused as PoolLimitError).kind).toBe('busy');
     const settled = await Promise.allSettled(running);
     expect(settled.map((s) => s.status)).toEqual(['rejected', 'rejected']);
+  });
+
+  it('leaves no analysis process spinning when the server is killed outright (kill -9) mid-task', async () => {
+    make();
+    const parent = fork(path.join(__dirname, 'helpers', 'pool-parent.cjs'), [], { stdio: ['ignore', 'ignore', 'inherit', 'ipc'] });
+    const { child } = await new Promise<{ parent: number; child: number }>((resolve) => parent.once('message', resolve as never));
+    expect(alive(child)).toBe(true);
+    parent.kill('SIGKILL');
+    const end = Date.now() + 5000;
+    while (alive(child) && Date.now() < end) await new Promise((resolve) => setTimeout(resolve, 100));
+    expect(alive(child)).toBe(false);
   });
 
   it('refuses work once closed', async () => {
