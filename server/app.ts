@@ -14,17 +14,18 @@ import { apiRoutes } from './routes';
 import { createServices } from './services';
 import { createPasswords } from './services/passwords';
 
-export type AppDeps = { sequelize: Sequelize; mailer: Mailer; config: Config };
+export type AppDeps = { sequelize: Sequelize; mailer: Mailer; config: Config; clock?: () => number };
 
 /** Build the whole HTTP app on a migrated database; the caller decides where it listens. */
-export function createApp({ sequelize, mailer, config }: AppDeps): Express {
+export function createApp({ sequelize, mailer, config, clock = Date.now }: AppDeps): Express {
   const models = getModels(sequelize);
-  const services = createServices({ sequelize, models, mailer, config, passwords: createPasswords(config.bcryptCost) });
+  const services = createServices({ sequelize, models, mailer, config, passwords: createPasswords(config.bcryptCost), clock });
   const app = express();
 
   app.disable('x-powered-by');
-  // In production a TLS proxy sits in front: trust its one hop for the client address and https.
-  if (config.isProduction) app.set('trust proxy', 1);
+  // X-Forwarded-For and X-Forwarded-Proto are believed only from the proxies TRUST_PROXY names
+  // (none by default in production): anyone else could set them to dodge the sign-in limits.
+  app.set('trust proxy', config.trustProxy.length > 0 ? config.trustProxy : false);
 
   app.use(securityHeaders(config.isProduction));
   app.use(refuseCrossSite(config.trustedOrigins));
@@ -37,7 +38,7 @@ export function createApp({ sequelize, mailer, config }: AppDeps): Express {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  api.use(apiRoutes(services, mailer.mailbox));
+  api.use(apiRoutes(services, mailer.mailbox, config));
   app.use('/api', api);
 
   app.use(config.webDevServer ? devWebProxy(config.webDevServer) : webApp(config.webDir));

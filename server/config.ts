@@ -1,5 +1,7 @@
 import { randomBytes } from 'node:crypto';
+import { availableParallelism } from 'node:os';
 import path from 'node:path';
+import ipaddr from 'ipaddr.js';
 import { z } from 'zod';
 
 /** The server's whole environment (api.md), parsed once at start so a typo fails loudly instead of later. */
@@ -19,6 +21,11 @@ const envSchema = z.object({
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
   WEB_DIR: z.string().trim().min(1).optional(),
   WEB_DEV_SERVER: z.url({ protocol: /^https?$/, error: 'use an http:// URL such as http://localhost:8081' }).optional(),
+  TRUST_PROXY: z.string().trim().optional(),
+  TRUSTED_ORIGINS: z.string().trim().optional(),
+  ANALYSIS_TIMEOUT_MS: z.coerce.number({ error: 'use a number of milliseconds' }).int().min(10).max(600_000).default(15_000),
+  ANALYSIS_MAX_OLD_MB: z.coerce.number({ error: 'use a number of megabytes' }).int().min(32).max(16_384).default(512),
+  ANALYSIS_WORKERS: z.coerce.number({ error: 'use a whole number of processes' }).int().min(1).max(32).optional(),
 });
 
 export type MailConfig = { kind: 'fake' } | { kind: 'smtp'; url: string };
@@ -42,6 +49,13 @@ export type Config = {
   webDir: string;
   /** `npm run dev`: pages come from Expo's dev server through this app, so the browser sees one origin. */
   webDevServer: string | null;
+  /**
+   * Proxy addresses whose X-Forwarded-For / X-Forwarded-Proto are believed (Express `trust proxy`):
+   * addresses, CIDR ranges or proxy-addr's names (loopback, linklocal, uniquelocal). Empty: none.
+   */
+  trustProxy: string[];
+  /** The analysis processes (server/analysis/pool.ts): per-task time and memory limits, and how many run at once. */
+  analysis: { timeoutMs: number; maxOldMb: number; workers: number };
 };
 
 /** Expo's dev server (npm run dev) calls the API from this origin. */
@@ -81,10 +95,17 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   if (isProduction && e.WEB_DEV_SERVER) {
     problems.push('WEB_DEV_SERVER: only for development; production serves the exported web app');
   }
+  // The session cookie is Secure in production, and browsers drop a Secure cookie sent over plain HTTP:
+  // a production server reached over http:// would answer every sign-in and keep nobody signed in.
+  if (isProduction && !e.APP_URL?.startsWith('https://')) {
+    problems.push('APP_URL: required in production and must be the https:// address people open (the session cookie is sent over HTTPS only)');
+  }
+  const trustProxy = parseTrustProxy(e.TRUST_PROXY, isProduction, problems);
+  const extraOrigins = parseOrigins(e.TRUSTED_ORIGINS, problems);
   if (problems.length > 0) throw new ConfigError(problems);
 
   const appUrl = (e.APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
-  const trustedOrigins = [new URL(appUrl).origin, ...(isProduction ? [] : [EXPO_DEV_ORIGIN])];
+  const trustedOrigins = [...new Set([new URL(appUrl).origin, ...extraOrigins, ...(isProduction ? [] : [EXPO_DEV_ORIGIN])])];
   return {
     isProduction,
     port: e.PORT,
@@ -99,7 +120,65 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     bcryptCost,
     webDir: path.resolve(e.WEB_DIR ?? 'dist/web'),
     webDevServer: e.WEB_DEV_SERVER ?? null,
+    trustProxy,
+    analysis: {
+      timeoutMs: e.ANALYSIS_TIMEOUT_MS,
+      maxOldMb: e.ANALYSIS_MAX_OLD_MB,
+      // One core stays free for answering requests while others analyse.
+      workers: e.ANALYSIS_WORKERS ?? Math.max(1, availableParallelism() - 1),
+    },
   };
+}
+
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+
+/**
+ * TRUST_PROXY: a comma-separated list of proxy addresses, CIDR ranges and the names loopback,
+ * linklocal, uniquelocal; `none` trusts nobody. Unset: nobody in production (the client address is
+ * the connection's own, so a forged X-Forwarded-For changes nothing), loopback elsewhere.
+ */
+function parseTrustProxy(value: string | undefined, isProduction: boolean, problems: string[]): string[] {
+  if (value === undefined) return isProduction ? [] : ['loopback'];
+  if (value.toLowerCase() === 'none') return [];
+  const entries = value.split(',').map((v) => v.trim()).filter(Boolean);
+  const bad = entries.filter((v) => !PROXY_NAMES.has(v) && !isAddress(v) && !isCidr(v));
+  if (bad.length > 0) {
+    problems.push(`TRUST_PROXY: ${bad.join(', ')} is not an address, a CIDR range or one of loopback, linklocal, uniquelocal`);
+  }
+  return entries;
+}
+
+/** A plain IPv4 (four decimal parts, not the legacy forms such as "1") or IPv6 address. */
+function isAddress(value: string): boolean {
+  return ipaddr.IPv4.isValidFourPartDecimal(value) || ipaddr.IPv6.isValid(value);
+}
+
+function isCidr(value: string): boolean {
+  const [address] = value.split('/');
+  if (!isAddress(address)) return false;
+  try {
+    ipaddr.parseCIDR(value);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** TRUSTED_ORIGINS: further origins (scheme://host[:port]) whose state-changing requests are accepted. */
+function parseOrigins(value: string | undefined, problems: string[]): string[] {
+  if (!value) return [];
+  const origins: string[] = [];
+  for (const entry of value.split(',').map((v) => v.trim()).filter(Boolean)) {
+    let url: URL | null = null;
+    try {
+      url = new URL(entry);
+    } catch {
+      url = null;
+    }
+    if (!url || !/^https?:$/.test(url.protocol)) problems.push(`TRUSTED_ORIGINS: ${entry} is not an http:// or https:// origin`);
+    else origins.push(url.origin);
+  }
+  return origins;
 }
 
 /** For entry points: a bad environment prints what is wrong and exits instead of throwing a stack trace. */

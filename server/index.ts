@@ -1,4 +1,5 @@
 import type { Server } from 'node:http';
+import { closeSharedPools } from './analysis/pool';
 import { createApp } from './app';
 import { loadConfigOrExit, type Config } from './config';
 import { openDatabase } from './db';
@@ -30,6 +31,8 @@ export async function startServer(config: Config): Promise<RunningServer> {
   console.log(`Mail: ${mailer.description}${mailer.mailbox ? ' (admins read it at /api/dev/mail)' : ''}`);
   if (config.isProduction && mailer.mailbox) console.warn('Warning: MAIL=fake in production; invitations reach nobody.');
 
+  const { workers, timeoutMs, maxOldMb } = config.analysis;
+  console.log(`Analysis: up to ${workers} process${workers === 1 ? '' : 'es'}, at most ${timeoutMs} ms and ${maxOldMb} MB per document`);
   const app = createApp({ sequelize, mailer, config });
   const server = await listen(app, config.port);
   const url = config.appUrl;
@@ -45,6 +48,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
       });
       await mailer.close();
       await closeWorkbookPool();
+      await closeSharedPools();
       await sequelize.close();
     },
   };

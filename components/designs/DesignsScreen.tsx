@@ -29,7 +29,8 @@ export function DesignsScreen() {
   const editor = role ? can(role, 'editDesigns') : false;
   const teamName = team.data?.team.name ?? 'your team';
   const intro = role === 'installer' ? `Approved designs of ${teamName}, ready to build.` : `Storage-network designs of ${teamName}.`;
-  const list = designs.data ?? [];
+  const list = designs.data?.designs ?? [];
+  const total = designs.data?.total ?? list.length;
   const searching = settled.trim() !== '';
 
   return (
@@ -57,9 +58,20 @@ export function DesignsScreen() {
       {list.length > 0 ? (
         <>
           <Text variant="small" color="inkMuted" testID="designs-count" aria-live="polite">
-            {searching ? `${list.length} matching “${settled.trim()}”` : `${list.length} ${list.length === 1 ? 'design' : 'designs'}`}
+            {searching ? `${total} matching “${settled.trim()}”` : `${total} ${total === 1 ? 'design' : 'designs'}`}
+            {list.length < total ? `, ${list.length} shown` : ''}
           </Text>
           {wide ? <DesignTable designs={list} /> : <DesignList designs={list} />}
+          {designs.hasNextPage ? (
+            <Button
+              label="Show more designs"
+              variant="secondary"
+              loading={designs.isFetchingNextPage}
+              loadingLabel="Loading more designs"
+              onPress={() => void designs.fetchNextPage()}
+              testID="designs-more"
+            />
+          ) : null}
         </>
       ) : null}
     </Screen>

@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CreateDesignBody, CreateDesignResponse, DesignResponse, DesignsResponse } from '@/shared/api/designs';
 import { useSessionPending } from '@/lib/api/session-gate';
 import { api } from '@/lib/api/client';
@@ -25,13 +25,32 @@ export const DESIGNS_STALE_MS = 30_000;
  */
 export const VERSION_STALE_MS = Infinity;
 
+/** GET /api/designs with the search term and the page to start after, each only when there is one. */
+export function designsPath(q: string, cursor: string | null): string {
+  const params = new URLSearchParams();
+  if (q) params.set('q', q);
+  if (cursor) params.set('cursor', cursor);
+  const query = params.toString();
+  return query ? `/api/designs?${query}` : '/api/designs';
+}
+
+/**
+ * The designs list, a page at a time (the server pages it, most recently changed first). `data` is
+ * every row loaded so far and the number of matches in all; `fetchNextPage` loads the next page
+ * while `hasNextPage`.
+ */
 export function useDesigns(q = '') {
   const query = q.trim();
   const pending = useSessionPending();
-  return useQuery({
+  return useInfiniteQuery({
     queryKey: designKeys.list(query),
-    queryFn: () => api.get<DesignsResponse>(query ? `/api/designs?q=${encodeURIComponent(query)}` : '/api/designs'),
-    select: (data) => data.designs,
+    queryFn: ({ pageParam }) => api.get<DesignsResponse>(designsPath(query, pageParam)),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor ?? null,
+    select: (data) => {
+      const designs = data.pages.flatMap((page) => page.designs);
+      return { designs, total: data.pages[0]?.total ?? designs.length };
+    },
     staleTime: DESIGNS_STALE_MS,
     // Keep the previous rows on screen while a new search term is being answered.
     placeholderData: (previous) => previous,

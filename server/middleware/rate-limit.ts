@@ -1,42 +1,35 @@
 import type { Request, RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 
-const WINDOW_MS = 15 * 60 * 1000;
-/** Failed sign-ins allowed per account and address in one window. */
-const FAILED_PER_ACCOUNT = 5;
-/** Failed sign-ins allowed per address across all accounts (guessing one password on many accounts). */
-const FAILED_PER_ADDRESS = 30;
-
-function tooMany(req: Request, res: Parameters<RequestHandler>[1]) {
-  const reset = (req as { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-  const minutes = reset ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 60000)) : 15;
-  res.status(429).json({
-    error: `Too many sign-in attempts. Wait ${minutes} minute${minutes === 1 ? '' : 's'} and try again.`,
-  });
+/**
+ * The client as the limits count it: its address (from the connection, or from X-Forwarded-For
+ * when the connection comes from a proxy TRUST_PROXY names), with IPv6 addresses taken as their
+ * /56, since one subscriber usually holds a whole block of them.
+ */
+export function clientKey(req: Request): string {
+  return ipKeyGenerator(req.ip ?? '');
 }
 
-function accountOf(req: Request): string {
-  const email = (req.body as { email?: unknown } | undefined)?.email;
-  return typeof email === 'string' ? email.trim().toLowerCase().slice(0, 200) : '';
-}
+const INVITATION_WINDOW_MS = 10 * 60 * 1000;
+/** Requests to the public invitation routes per address in one window: opening a link and accepting it takes two or three. */
+const INVITATION_REQUESTS = 30;
 
 /**
- * Failed sign-ins are limited per account and address (five per 15 minutes), so a whole office behind
- * one address can still sign in at once, and per address across accounts (thirty), so one address
- * cannot try a password on every account. Successful sign-ins do not count. Counters are in memory
- * per app instance (one server process; several processes would need a shared store).
+ * The public invitation routes (preview and accept), per address: enough for a person opening
+ * their link a few times and fixing a too-short password, too few to try tokens or to hash
+ * passwords by the thousand. In memory per process, like the sign-in limits.
  */
-export function signInLimiter(): RequestHandler[] {
-  const common = {
-    windowMs: WINDOW_MS,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8' as const,
+export function invitationLimiter(): RequestHandler {
+  return rateLimit({
+    windowMs: INVITATION_WINDOW_MS,
+    limit: INVITATION_REQUESTS,
+    standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: tooMany,
-  };
-  const address = (req: Request) => ipKeyGenerator(req.ip ?? '');
-  return [
-    rateLimit({ ...common, limit: FAILED_PER_ADDRESS, keyGenerator: address }),
-    rateLimit({ ...common, limit: FAILED_PER_ACCOUNT, keyGenerator: (req) => `${address(req)}|${accountOf(req)}` }),
-  ];
+    keyGenerator: clientKey,
+    handler: (req, res) => {
+      const reset = (req as { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      const minutes = reset ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 60000)) : 10;
+      res.status(429).json({ error: `Too many requests for invitation links from your address. Wait ${minutes} minute${minutes === 1 ? '' : 's'} and try again.` });
+    },
+  });
 }

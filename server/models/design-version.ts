@@ -1,8 +1,8 @@
 import { DataTypes, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Model, type ModelStatic, type Sequelize } from 'sequelize';
 
 /**
- * One immutable version of a design: the topology document as JSON text, the analysis summary taken
- * when it was saved (JSON text), and the sha256 of the document's canonical JSON. Rows are only ever
+ * One immutable version of a design: the topology document as JSON text, the analysis summary and full
+ * report taken when it was saved (JSON text), and the sha256 of the document's canonical JSON. Rows are only ever
  * inserted; the table's triggers refuse updates and deletes (migration 0005), and so do these hooks.
  */
 export interface DesignVersionRow extends Model<InferAttributes<DesignVersionRow>, InferCreationAttributes<DesignVersionRow>> {
@@ -14,6 +14,8 @@ export interface DesignVersionRow extends Model<InferAttributes<DesignVersionRow
   authorId: number;
   summary: string;
   contentHash: string;
+  /** The full analysis report as JSON text; null on versions saved before reports were stored (migration 0006). */
+  report: CreationOptional<string | null>;
   createdAt: Date;
 }
 
@@ -29,6 +31,7 @@ export function defineDesignVersion(sequelize: Sequelize): ModelStatic<DesignVer
       authorId: { type: DataTypes.INTEGER, allowNull: false },
       summary: { type: DataTypes.TEXT, allowNull: false },
       contentHash: { type: DataTypes.STRING(64), allowNull: false },
+      report: { type: DataTypes.TEXT, allowNull: true },
       createdAt: { type: DataTypes.DATE, allowNull: false },
     },
     { tableName: 'design_versions', timestamps: false },

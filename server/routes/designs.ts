@@ -17,7 +17,7 @@ export function designRoutes({ designs }: Services): Router {
   const byId = validate({ params: designIdParams });
 
   router.get('/', read, listing, async (req, res) => {
-    reply(res, await designs.list(currentUser(req), listing.input(req).query.q), 200, (list) => ({ designs: list }));
+    reply(res, await designs.list(currentUser(req), listing.input(req).query), 200, (page) => page);
   });
 
   router.post('/', requireCapability('editDesigns'), creation, async (req, res) => {

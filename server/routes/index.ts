@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { Config } from '@/server/config';
 import type { Mailbox } from '@/server/mail/mailbox';
 import { apiNotFound } from '@/server/middleware/errors';
 import type { Services } from '@/server/services';
@@ -14,11 +15,11 @@ import { versionRoutes } from './versions';
  * Everything under /api. Each route names its own guard (requireUser / requireCapability) next to its
  * path; the only routes without one are sign-in, sign-out and the invitation-token routes.
  */
-export function apiRoutes(services: Services, mailbox: Mailbox | null): Router {
+export function apiRoutes(services: Services, mailbox: Mailbox | null, config: Config): Router {
   const api = Router();
-  api.use('/auth', authRoutes(services));
+  api.use('/auth', authRoutes(services, config));
   api.use('/team', teamRoutes(services));
-  api.use('/invitations', invitationRoutes(services));
+  api.use('/invitations', invitationRoutes(services, config));
   api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services));
   api.use('/dev/mail', devMailRoutes(mailbox));
   api.use(apiNotFound);

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { designIdParams, diffQuery, restoreBody, reviewBody, saveVersionBody, versionParams } from '@/shared/api/designs';
-import { reply } from '@/server/http/reply';
+import { reply, replyJsonText } from '@/server/http/reply';
 import { currentUser, requireAnyCapability, requireCapability } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import type { Services } from '@/server/services';
@@ -32,7 +32,7 @@ export function versionRoutes({ versions, reviews }: Services): Router {
 
   router.get('/:id/versions/:n/report', read, one, async (req, res) => {
     const { id, n } = one.input(req).params;
-    reply(res, await versions.report(currentUser(req), id, n), 200, (report) => report);
+    replyJsonText(res, await versions.report(currentUser(req), id, n), 200, (stored) => ({ report: stored.reportJson, summary: JSON.stringify(stored.summary) }));
   });
 
   // The diff reads "from version `against` to version `n`": what changed going from the first to the second.

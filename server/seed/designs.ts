@@ -5,6 +5,7 @@ import harborRoadV1 from '@/shared/fixtures/harbor-road-v1.json';
 import harborRoadV2 from '@/shared/fixtures/harbor-road-v2.json';
 import { directAttach } from '@/shared/patterns';
 import type { Models } from '@/server/models';
+import { inProcessAnalysis } from '@/server/services/analysis';
 import { createDesignServices } from '@/server/services/designs';
 import { toUser } from '@/server/services/dto';
 import type { Result } from '@/server/services/result';
@@ -32,6 +33,8 @@ export async function seedDesigns(sequelize: Sequelize, models: Models, people: 
     models,
     appUrl: 'http://localhost',
     now: () => current,
+    // The demo's own fixtures: analysed here, so seeding needs no analysis process.
+    analysis: inProcessAnalysis(),
     mailer: {
       sendMail: () => Promise.reject(new Error('the demo seed sends no e-mail')),
     },

@@ -11,4 +11,6 @@ export type ServiceDeps = {
   mailer: Mailer;
   config: Config;
   passwords: Passwords;
+  /** Milliseconds since the epoch; tests pass their own to step through time-based limits. */
+  clock: () => number;
 };

@@ -1,7 +1,19 @@
 import type { Issue } from '@/shared/api/common';
 
 /** What can go wrong in a service, independent of HTTP; routes map each kind to a status (server/http/reply.ts). */
-export type FailureKind = 'invalid' | 'not-found' | 'conflict' | 'forbidden' | 'unauthorized' | 'unavailable';
+export type FailureKind =
+  | 'invalid'
+  | 'not-found'
+  | 'conflict'
+  | 'forbidden'
+  | 'unauthorized'
+  | 'unavailable'
+  /** Well-formed, but past what the server will work on (the analysis' time or memory limit). */
+  | 'unprocessable'
+  /** Too many attempts of one kind; `details.retryAfterSeconds` says when to try again. */
+  | 'too-many'
+  /** The server cannot take more of this work right now (its queues are full). */
+  | 'busy';
 
 /**
  * `issues` point at the request's fields (for `invalid`); `details` are extra fields of the error body,

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { User } from '@/shared/api/auth';
 import type { Member, TeamResponse } from '@/shared/api/team';
 import { can, type Role } from '@/shared/roles';
@@ -42,13 +42,19 @@ export function createTeamService({ sequelize, models }: Pick<ServiceDeps, 'sequ
       if (member.id === viewer.id && role !== member.role) {
         return fail('conflict', 'You cannot change your own role. Ask another admin to do it.');
       }
-      if (member.role !== role) await member.update({ role });
+      if (member.role !== role) {
+        await sequelize.transaction(async (transaction) => {
+          await member.update({ role }, { transaction });
+          if (role !== 'admin') await withdrawInvitationsOf(member.id, transaction);
+        });
+      }
       return ok(toMember(member));
     },
 
     /**
      * Removal is soft: the row stays so the versions and reviews they made keep naming them, but they
-     * leave the members list, cannot sign in, and every session of theirs ends at once.
+     * leave the members list, cannot sign in, every session of theirs ends at once, and the
+     * invitations they sent stop working.
      */
     async removeMember(viewer: User, memberId: number): Promise<Result<null>> {
       const member = await findMember(viewer, memberId);
@@ -59,10 +65,19 @@ export function createTeamService({ sequelize, models }: Pick<ServiceDeps, 'sequ
       await sequelize.transaction(async (transaction) => {
         await Session.destroy({ where: { userId: member.id }, transaction });
         await member.update({ removedAt: new Date() }, { transaction });
+        await withdrawInvitationsOf(member.id, transaction);
       });
       return ok(null);
     },
   };
+
+  /**
+   * An invitation lives only as long as its sender is an admin: one who is demoted or removed takes
+   * their open invitations with them (invitations.ts checks the sender again when a link is used).
+   */
+  async function withdrawInvitationsOf(senderId: number, transaction: Transaction): Promise<void> {
+    await Invitation.update({ revokedAt: new Date() }, { where: { invitedById: senderId, acceptedAt: null, revokedAt: null }, transaction });
+  }
 }
 
 export type TeamService = ReturnType<typeof createTeamService>;

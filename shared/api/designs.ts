@@ -3,6 +3,7 @@ import type { ReportSummary } from '../analysis/summary';
 import type { Report } from '../analysis/types';
 import type { TopologyDiff } from '../diff/types';
 import type { Topology } from '../topology/schema';
+import { cleanText } from '../text/clean';
 
 /**
  * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
@@ -19,16 +20,54 @@ export type ReviewState = DesignStatus;
 export const REVIEW_ACTIONS = ['submit', 'approve', 'request-changes'] as const;
 export type ReviewAction = (typeof REVIEW_ACTIONS)[number];
 
-const designName = z.string().trim().min(1, 'Give the design a name').max(120, 'Use at most 120 characters');
-const site = z.string().trim().max(120, 'Use at most 120 characters');
-const message = z.string().trim().min(1, 'Say what changed in this version').max(500, 'Use at most 500 characters');
+/**
+ * Names, sites and messages are shown in lists, e-mails and printouts: control and text-direction
+ * characters are taken out first (cleanText), so a name cannot reverse or hide the text after it.
+ * Review comments keep their line breaks; each line is cleaned.
+ */
+const cleaned = () => z.string().transform(cleanText);
+const designName = cleaned().pipe(z.string().trim().min(1, 'Give the design a name').max(120, 'Use at most 120 characters'));
+const site = cleaned().pipe(z.string().trim().max(120, 'Use at most 120 characters'));
+const message = cleaned().pipe(z.string().trim().min(1, 'Say what changed in this version').max(500, 'Use at most 500 characters'));
+
+/** Each line of a multi-line text cleaned on its own, the line breaks kept (CR LF read as LF). */
+export function cleanLines(text: string): string {
+  return text.split(/\r\n|\n|\r/).map(cleanText).join('\n');
+}
 
 export const designIdParams = z.object({ id: z.coerce.number().int().positive() }).strict();
 export const versionParams = z
   .object({ id: z.coerce.number().int().positive(), n: z.coerce.number().int().positive() })
   .strict();
 export const diffQuery = z.object({ against: z.coerce.number().int().positive() }).strict();
-export const designListQuery = z.object({ q: z.string().max(120).optional() }).strict();
+/** How many designs one page of GET /api/designs holds at most, unless `limit` says fewer. */
+export const DESIGN_PAGE_SIZE = 50;
+export const MAX_DESIGN_PAGE_SIZE = 100;
+
+/** A position in the designs list (most recently changed first): after the design changed at `updatedAt` with `id`. */
+export type DesignCursor = { updatedAt: number; id: number };
+
+/** Cursors are `<updatedAt in ms>.<id>`; clients pass back the `nextCursor` they were given and never build one. */
+export function encodeDesignCursor(cursor: DesignCursor): string {
+  return `${cursor.updatedAt}.${cursor.id}`;
+}
+
+const designCursor = z
+  .string()
+  .regex(/^\d{1,15}\.\d{1,15}$/, 'Use the nextCursor of the previous page')
+  .transform((value): DesignCursor => {
+    const [updatedAt, id] = value.split('.').map(Number);
+    return { updatedAt, id };
+  });
+
+export const designListQuery = z
+  .object({
+    q: z.string().max(120).optional(),
+    limit: z.coerce.number().int().min(1).max(MAX_DESIGN_PAGE_SIZE, `Ask for at most ${MAX_DESIGN_PAGE_SIZE} designs at a time`).default(DESIGN_PAGE_SIZE),
+    cursor: designCursor.optional(),
+  })
+  .strict();
+export type DesignListQuery = z.infer<typeof designListQuery>;
 
 export const createDesignBody = z
   .object({ name: designName, site: site.optional(), document: z.unknown().optional(), message: message.optional() })
@@ -50,7 +89,7 @@ export type RestoreBody = z.infer<typeof restoreBody>;
 export const reviewBody = z
   .object({
     action: z.enum(REVIEW_ACTIONS),
-    comment: z.string().trim().max(4000, 'Use at most 4000 characters').optional(),
+    comment: z.string().transform(cleanLines).pipe(z.string().trim().max(4000, 'Use at most 4000 characters')).optional(),
   })
   .strict();
 export type ReviewBody = z.infer<typeof reviewBody>;
@@ -93,10 +132,14 @@ export type DesignListItem = {
   updatedAt: string;
 };
 
-export type DesignDto = Omit<DesignListItem, 'latestVersion'> & { createdAt: string; createdBy: Person | null };
+export type DesignDto = DesignListItem & { createdAt: string; createdBy: Person | null };
 
-/** GET /api/designs — the caller's team's designs, most recently changed first. */
-export type DesignsResponse = { designs: DesignListItem[] };
+/**
+ * GET /api/designs?q=&limit=&cursor= — one page of the caller's team's designs, most recently changed
+ * first. `nextCursor` asks for the page after this one (null on the last page); `total` counts every
+ * design matching `q` that the caller may see.
+ */
+export type DesignsResponse = { designs: DesignListItem[]; nextCursor: string | null; total: number };
 /**
  * GET /api/designs/:id — `versions` newest first, without documents. For installers: only approved
  * versions, `design.status` is "approved", and a design with no approved version answers 404.

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { emailSchema, newPasswordSchema, roleSchema } from './auth';
+import { emailSchema, newPasswordSchema, personName, roleSchema } from './auth';
 import type { Role } from '../roles';
 import { idParam } from './common';
 
@@ -8,7 +8,7 @@ export type InvitationBody = z.infer<typeof invitationBody>;
 
 export const acceptInvitationBody = z
   .object({
-    name: z.string().trim().min(1, 'Enter your name').max(120, 'Use at most 120 characters'),
+    name: personName,
     password: newPasswordSchema,
   })
   .strict();

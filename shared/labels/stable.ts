@@ -28,6 +28,17 @@ export type LabelHistory = {
 
 export const NO_LABEL_HISTORY: LabelHistory = { previous: new Map(), holders: new Map() };
 
+/** A LabelHistory as plain JSON (Maps do not cross a process boundary): lists, never objects keyed by ids. */
+export type LabelHistoryData = { previous: Cable[]; holders: [string, LabelHolder][] };
+
+export function labelHistoryData(history: LabelHistory): LabelHistoryData {
+  return { previous: [...history.previous.values()], holders: [...history.holders.entries()] };
+}
+
+export function labelHistoryFromData(data: LabelHistoryData): LabelHistory {
+  return { previous: new Map(data.previous.map((cable) => [cable.id, cable])), holders: new Map(data.holders) };
+}
+
 /** The history of a design from its versions' cables, oldest version first. */
 export function labelHistory(versions: readonly { cables: readonly Cable[] }[]): LabelHistory {
   const holders = new Map<string, LabelHolder>();

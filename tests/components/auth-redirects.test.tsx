@@ -34,7 +34,7 @@ function routes() {
 function FetchingScreen() {
   const designs = useDesigns();
   const team = useTeam();
-  return <Text>{`fetching screen: ${designs.data?.length ?? '-'} designs, ${team.data?.members.length ?? '-'} members`}</Text>;
+  return <Text>{`fetching screen: ${designs.data?.designs.length ?? '-'} designs, ${team.data?.members.length ?? '-'} members`}</Text>;
 }
 
 function answerMe(user: typeof demoUsers.admin | null) {

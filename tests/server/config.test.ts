@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { ConfigError, EXPO_DEV_ORIGIN, loadConfig } from '@/server/config';
 
-const PROD = { NODE_ENV: 'production', SESSION_SECRET: 'k'.repeat(32) };
+const PROD = { NODE_ENV: 'production', SESSION_SECRET: 'k'.repeat(32), APP_URL: 'https://cablewright.example' };
 
 function problems(env: Record<string, string>): string[] {
   try {
@@ -82,6 +82,42 @@ describe('server configuration from the environment', () => {
   });
 
   it('does not trust the Expo dev server origin in production', () => {
-    expect(loadConfig(PROD).trustedOrigins).toEqual(['http://localhost:8080']);
+    expect(loadConfig(PROD).trustedOrigins).toEqual(['https://cablewright.example']);
+  });
+
+  it('refuses to start in production without an https APP_URL, and says why', () => {
+    const { APP_URL: _unused, ...withoutUrl } = PROD;
+    for (const env of [withoutUrl, { ...PROD, APP_URL: 'http://cablewright.example' }]) {
+      const found = problems(env).find((p) => p.startsWith('APP_URL'));
+      // RFC 6265 §4.1.2.5: a Secure cookie is only sent over secure channels.
+      expect(found).toMatch(/https:\/\/.*session cookie is sent over HTTPS only/);
+    }
+    expect(loadConfig({ APP_URL: 'http://localhost:8093' }).appUrl).toBe('http://localhost:8093');
+  });
+
+  it('trusts forwarding headers from loopback outside production and from nobody in production, unless TRUST_PROXY says', () => {
+    expect(loadConfig({}).trustProxy).toEqual(['loopback']);
+    expect(loadConfig(PROD).trustProxy).toEqual([]);
+    // RFC 5737 documentation addresses and RFC 1918 ranges stand in for a real proxy.
+    expect(loadConfig({ ...PROD, TRUST_PROXY: '192.0.2.10, 10.0.0.0/8, loopback' }).trustProxy).toEqual(['192.0.2.10', '10.0.0.0/8', 'loopback']);
+    expect(loadConfig({ TRUST_PROXY: 'none' }).trustProxy).toEqual([]);
+    expect(problems({ TRUST_PROXY: '1' })[0]).toMatch(/^TRUST_PROXY: 1 is not an address/);
+    expect(problems({ TRUST_PROXY: '192.0.2.300' })[0]).toMatch(/^TRUST_PROXY/);
+  });
+
+  it('adds TRUSTED_ORIGINS to the origins whose changes are accepted', () => {
+    const config = loadConfig({ ...PROD, TRUSTED_ORIGINS: 'https://admin.cablewright.example, https://cablewright.example/' });
+    expect(config.trustedOrigins).toEqual(['https://cablewright.example', 'https://admin.cablewright.example']);
+    expect(problems({ TRUSTED_ORIGINS: 'cablewright.example' })[0]).toMatch(/^TRUSTED_ORIGINS/);
+  });
+
+  it('limits each analysis to 15 s and 512 MB by default, with one process per core but one', () => {
+    const { analysis } = loadConfig({});
+    expect(analysis.timeoutMs).toBe(15_000);
+    expect(analysis.maxOldMb).toBe(512);
+    expect(analysis.workers).toBeGreaterThanOrEqual(1);
+    expect(loadConfig({ ANALYSIS_TIMEOUT_MS: '2500', ANALYSIS_MAX_OLD_MB: '256', ANALYSIS_WORKERS: '3' }).analysis).toEqual({ timeoutMs: 2500, maxOldMb: 256, workers: 3 });
+    const bad = problems({ ANALYSIS_TIMEOUT_MS: 'soon', ANALYSIS_MAX_OLD_MB: '8', ANALYSIS_WORKERS: '0' });
+    expect(bad.map((p) => p.split(':')[0]).sort()).toEqual(['ANALYSIS_MAX_OLD_MB', 'ANALYSIS_TIMEOUT_MS', 'ANALYSIS_WORKERS']);
   });
 });

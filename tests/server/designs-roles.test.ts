@@ -27,6 +27,18 @@ type Case = {
 const get = (agent: ReturnType<typeof request> | Agent, path: string) => agent.get(path);
 const comment = 'The fabric B cable of the new host is missing; please add it.';
 
+/**
+ * A document nobody else has saved: the admin saved harborV2 in an earlier case, and nobody reviews
+ * content they saved themselves (four eyes), so the review cases give Ravi content of his own.
+ */
+let ravisEdits = 0;
+function ravisOwnDocument() {
+  const doc = harborV2();
+  ravisEdits += 1;
+  doc.cables[0].lengthM = 10 + ravisEdits;
+  return doc;
+}
+
 const CASES: Case[] = [
   { route: 'GET /api/designs', expect: [200, 200, 200, 200, 200], target: async () => '/api/designs', call: get },
   {
@@ -66,13 +78,13 @@ const CASES: Case[] = [
   {
     route: 'POST …/versions/:n/review approve (in review, by Ravi)',
     expect: [200, 403, 200, 403, 404],
-    target: async ({ id, ravi }) => `/api/designs/${id}/versions/${await saveAndSubmit(ravi, id)}/review`,
+    target: async ({ id, ravi }) => `/api/designs/${id}/versions/${await saveAndSubmit(ravi, id, ravisOwnDocument())}/review`,
     call: (a, path) => a.post(path).send({ action: 'approve' }),
   },
   {
     route: 'POST …/versions/:n/review request-changes (in review, by Ravi)',
     expect: [200, 403, 200, 403, 404],
-    target: async ({ id, ravi }) => `/api/designs/${id}/versions/${await saveAndSubmit(ravi, id)}/review`,
+    target: async ({ id, ravi }) => `/api/designs/${id}/versions/${await saveAndSubmit(ravi, id, ravisOwnDocument())}/review`,
     call: (a, path) => a.post(path).send({ action: 'request-changes', comment }),
   },
 ];

@@ -3,7 +3,7 @@ import { createServer } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { makeTestApp, signInAs, type TestApp } from './helpers/app';
+import { makeTestApp, PRODUCTION_ENV, signInAs, type TestApp } from './helpers/app';
 
 describe('the API surface', () => {
   let t: TestApp;
@@ -67,7 +67,7 @@ describe('the API surface', () => {
 
 describe('under production settings', () => {
   it('sends HSTS and upgrade-insecure-requests', async () => {
-    const prod = await makeTestApp({ env: { NODE_ENV: 'production', SESSION_SECRET: 'p'.repeat(40), BCRYPT_COST: '10' }, seed: false });
+    const prod = await makeTestApp({ env: PRODUCTION_ENV, seed: false });
     try {
       const res = await request(prod.app).get('/api/auth/me');
       // RFC 6797 §6.1: Strict-Transport-Security with max-age.

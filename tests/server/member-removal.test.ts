@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { SENDER_NOT_ADMIN } from '@/server/services/invitations';
 import { APP_ORIGIN, DEMO, DEMO_PASSWORD, makeTestApp, signInAs, type TestApp } from './helpers/app';
 
 let t: TestApp;
@@ -86,14 +87,19 @@ describe('removing a member keeps their name on their work', () => {
 });
 
 describe('invitations sent by a member who was removed', () => {
-  it('still name who sent them', async () => {
+  it('stop working, leave the pending list, and their link says why', async () => {
     const admin = await signInAs(t.app, 'admin');
     const theoId = await idOf(DEMO.reviewer);
     await admin.patch(`/api/team/members/${theoId}`).send({ role: 'admin' }).expect(200);
     const theo = await signInAs(t.app, 'reviewer');
-    await theo.post('/api/team/invitations').send({ email: 'new.person@tidewater.example', role: 'designer' }).expect(201);
+    await theo.post('/api/team/invitations').send({ email: 'new.person@tidewater.example', role: 'admin' }).expect(201);
+    const mail = (await admin.get('/api/dev/mail').expect(200)).body.messages.find((m: { to: string[] }) => m.to.includes('new.person@tidewater.example'));
+    const token = /\/invitations\/([A-Za-z0-9_-]{43})/.exec(mail?.text ?? '')?.[1];
     await admin.delete(`/api/team/members/${theoId}`).expect(204);
-    const { invitations } = (await admin.get('/api/team').expect(200)).body;
-    expect(invitations).toEqual([expect.objectContaining({ email: 'new.person@tidewater.example', invitedBy: { id: theoId, name: 'Theo Brandt' } })]);
+    expect((await admin.get('/api/team').expect(200)).body.invitations).toEqual([]);
+    const res = await request(t.app).post(`/api/invitations/${token}/accept`).send({ name: 'New Person', password: NEW_PASSWORD });
+    expect(res.status).toBe(404);
+    expect(res.body.error).toBe(SENDER_NOT_ADMIN);
+    expect(await t.models.User.count({ where: { email: 'new.person@tidewater.example' } })).toBe(0);
   });
 });

@@ -110,6 +110,35 @@ describe('nobody reviews their own version', () => {
     expect(res.status).toBe(200);
     expect(res.body.review.events[1].actor.name).toBe('Maya Okafor');
   });
+
+  it('answers 403 when a designer restores the admin’s version and the admin tries to approve that same content', async () => {
+    const doc = harborV1();
+    doc.cables[0].lengthM = 4;
+    const mine = (await saveOnTop(maya, id, doc, 'Shorter first cable')).body.version.number as number;
+    await saveOnTop(ravi, id, harborV2(), 'Back to the approved layout').then((res) => expect(res.status).toBe(201));
+    const restored = await ravi.post(`/api/designs/${id}/versions/${mine}/restore`).send({ message: 'Shorter cable after all' }).expect(201);
+    const n = restored.body.version.number as number;
+    expect(restored.body.version.author.name).toBe('Ravi Menon');
+    await review(ravi, n, { action: 'submit' }).expect(200);
+
+    const res = await review(maya, n, { action: 'approve', comment: 'Ravi’s version, approved.' });
+    // RFC 9110 §15.5.4: 403 Forbidden — the content is Maya's own work, whoever saved this copy.
+    expect(res.status).toBe(403);
+    expect(res.body.error).toBe(`Version ${n} has the same content as version ${mine}, which you saved, so someone else has to review it.`);
+    expect(await stateOf(n)).toBe('in-review');
+    await review(theo, n, { action: 'approve', comment: 'Checked by someone who did not draw it.' }).expect(200);
+  });
+
+  it('lets the admin review content that only looks like theirs but differs', async () => {
+    const doc = harborV1();
+    doc.cables[0].lengthM = 4;
+    await saveOnTop(maya, id, doc, 'Shorter first cable');
+    const other = harborV1();
+    other.cables[0].lengthM = 5;
+    const saved = await saveOnTop(ravi, id, other, 'A little longer');
+    await review(ravi, saved.body.version.number, { action: 'submit' }).expect(200);
+    await review(maya, saved.body.version.number, { action: 'request-changes', comment: 'Keep it at 4 m.' }).expect(200);
+  });
 });
 
 describe('comments', () => {

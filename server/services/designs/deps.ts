@@ -1,5 +1,6 @@
 import { Transaction } from 'sequelize';
 import type { Mailer } from '@/server/mail/mailer';
+import type { Analysis } from '@/server/services/analysis';
 import type { ServiceDeps } from '@/server/services/deps';
 
 /**
@@ -11,6 +12,8 @@ export type DesignDeps = Pick<ServiceDeps, 'sequelize' | 'models'> & {
   /** Base of the links in e-mails (config.appUrl). */
   appUrl: string;
   now: () => Date;
+  /** Validation and analysis of documents, off the request thread (the seed runs its fixtures in process). */
+  analysis: Analysis;
 };
 
 /**

@@ -1,29 +1,24 @@
 import type { User } from '@/shared/api/auth';
-import type { CreateDesignBody, CreateDesignResponse, DesignListItem, DesignResponse } from '@/shared/api/designs';
+import type { CreateDesignBody, CreateDesignResponse, DesignListQuery, DesignResponse, DesignsResponse } from '@/shared/api/designs';
 import { fail, ok, type Result } from '@/server/services/result';
 import { writeTransaction, type DesignDeps, type Within } from './deps';
-import { toDesignDto, toListItem, toVersionSummary } from './dto';
-import { loadDesignView, loadDesignViews } from './load';
+import { toDesignDto, toVersionSummary } from './dto';
+import { listDesigns } from './list';
+import { loadDesignView } from './load';
 import { DEFAULT_FIRST_MESSAGE, NO_SUCH_DESIGN } from './messages';
-import { appendVersion, prepareDocument, type PreparedDocument } from './write';
+import { appendVersion, type PreparedDocument } from './write';
 
 /** The team's designs: list, read one with its versions, create one (optionally with version 1). */
 export function createDesignService(deps: DesignDeps) {
-  const { models, now } = deps;
+  const { models, now, analysis } = deps;
 
   return {
     /**
-     * The caller's team's designs, most recently changed first. `q` matches name or site, ignoring
-     * case. It is matched here rather than in SQL: SQLite's LIKE folds ASCII only, and a team's
-     * design list is small enough to filter in memory.
+     * One page of the caller's team's designs, most recently changed first; `q` matches name or
+     * site, ignoring case (list.ts).
      */
-    async list(viewer: User, q?: string): Promise<Result<DesignListItem[]>> {
-      const views = await loadDesignViews(models, viewer, { teamId: viewer.teamId });
-      const needle = q?.trim().toLocaleLowerCase();
-      const matching = needle
-        ? views.filter((v) => [v.design.name, v.design.site ?? ''].some((text) => text.toLocaleLowerCase().includes(needle)))
-        : views;
-      return ok(matching.map((v) => toListItem(v, viewer)));
+    async list(viewer: User, query: DesignListQuery): Promise<Result<DesignsResponse>> {
+      return ok(await listDesigns(deps.sequelize, viewer, query));
     },
 
     /** One design with the versions the caller may open, newest first. */
@@ -37,7 +32,7 @@ export function createDesignService(deps: DesignDeps) {
     async create(viewer: User, body: CreateDesignBody, within: Within = {}): Promise<Result<CreateDesignResponse>> {
       let prepared: PreparedDocument | null = null;
       if (body.document !== undefined) {
-        const result = prepareDocument(body.document);
+        const result = await analysis.prepare(body.document);
         if (!result.ok) return result;
         prepared = result.value;
       }

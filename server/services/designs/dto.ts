@@ -73,17 +73,13 @@ export function approvedVersionOf(view: DesignView): DesignListItem['approvedVer
 export function toDesignDto(view: DesignView, viewer: User): DesignDto {
   const { design } = view;
   return {
-    id: design.id,
-    name: design.name,
-    site: design.site,
-    status: statusFor(viewer, design.status),
-    approvedVersion: approvedVersionOf(view),
-    updatedAt: design.updatedAt.toISOString(),
+    ...toListItem(view, viewer),
     createdAt: design.createdAt.toISOString(),
     createdBy: design.createdById === null ? null : toPerson(view.people, design.createdById),
   };
 }
 
+/** A design as the list shows it, from a loaded view (the list itself is read by list.ts in one query). */
 export function toListItem(view: DesignView, viewer: User): DesignListItem {
   const { design } = view;
   const [latest] = view.versions;

@@ -75,9 +75,14 @@ export function findVersion(view: DesignView, number: number): VersionRecord | u
 
 /** The stored document of a version; it was validated when it was saved. */
 export async function loadDocument(models: Models, versionId: number, transaction?: Transaction): Promise<unknown> {
+  return JSON.parse(await loadDocumentText(models, versionId, transaction)) as unknown;
+}
+
+/** The stored document as the JSON text it was saved as. */
+export async function loadDocumentText(models: Models, versionId: number, transaction?: Transaction): Promise<string> {
   const row = await models.DesignVersion.findByPk(versionId, { attributes: ['id', 'document'], transaction });
   if (!row) throw new Error(`version row ${versionId} vanished`);
-  return JSON.parse(row.document) as unknown;
+  return row.document;
 }
 
 /** Removed members stay in this map: versions and reviews keep naming who made them. */

@@ -6,7 +6,7 @@ import type { ReviewEventRow } from '@/server/models';
 import { fail, invalid, ok, type Failure, type Result } from '@/server/services/result';
 import { writeTransaction, type DesignDeps, type Within } from './deps';
 import { toDesignDto, toReview } from './dto';
-import { findVersion, loadDesignView } from './load';
+import { findVersion, loadDesignView, type VersionRecord } from './load';
 import { NO_SUCH_DESIGN, noSuchVersion } from './messages';
 import { createReviewNotifier } from './notifications';
 import { designStatus, STATE_WORDS, versionState } from './review-state';
@@ -20,7 +20,9 @@ const ACTION_WORDS = { submit: 'submit versions for review', approve: 'approve v
  * - Only the latest version can be submitted, and only while it is a draft: an older draft has been
  *   superseded by the newer one, which is what should be reviewed. A version sent back stays sent
  *   back; the fix is a new version, submitted in its turn.
- * - Approve and request-changes need a version in review, and never by the version's author.
+ * - Approve and request-changes need a version in review, and never by the version's author, nor by
+ *   anyone who saved a version of the design with the same content (same content hash): restoring
+ *   someone's version makes a new one authored by the restorer, and its content stays theirs.
  * - Asking for changes needs a comment; approving a version whose stored summary has errors needs a
  *   comment that explains the override, and the event is marked `override`.
  * - The design's status is recomputed from all its versions in the same transaction.
@@ -41,8 +43,9 @@ export function createReviewService(deps: DesignDeps) {
       if (!view) return fail('not-found', NO_SUCH_DESIGN);
       const record = findVersion(view, n);
       if (!record) return fail('not-found', noSuchVersion(n));
-      if (body.action !== 'submit' && record.row.authorId === viewer.id) {
-        return fail('forbidden', `You saved version ${n} yourself, so someone else has to review it.`);
+      if (body.action !== 'submit') {
+        const ownWork = ownContent(view.all, record, viewer.id);
+        if (ownWork) return ownWork;
       }
       const comment = body.comment?.trim() ? body.comment.trim() : null;
       const summary = JSON.parse(record.row.summary) as ReportSummary;
@@ -78,6 +81,19 @@ export function createReviewService(deps: DesignDeps) {
     const status = designStatus(versions.map((v) => ({ number: v.number, events: events.filter((e) => e.versionId === v.id) })));
     await models.Design.update({ status, updatedAt: now() }, { where: { id: designId }, transaction });
   }
+}
+
+/**
+ * Four eyes: a 403 when `viewerId` saved this version, or any version of the design with the same
+ * content. A 403 like the role checks (api.md: the person may not do this; someone else may), not
+ * a 409: no change of the version's state would make it allowed.
+ */
+function ownContent(all: readonly VersionRecord[], record: VersionRecord, viewerId: number): Failure | null {
+  const n = record.row.number;
+  if (record.row.authorId === viewerId) return fail('forbidden', `You saved version ${n} yourself, so someone else has to review it.`);
+  const twin = all.find((v) => v.row.authorId === viewerId && v.row.contentHash === record.row.contentHash);
+  if (!twin) return null;
+  return fail('forbidden', `Version ${n} has the same content as version ${twin.row.number}, which you saved, so someone else has to review it.`);
 }
 
 function checkState(action: ReviewBody['action'], state: ReturnType<typeof versionState>, n: number, latest: number | null): Failure | null {

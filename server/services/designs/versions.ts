@@ -1,21 +1,18 @@
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import type { User } from '@/shared/api/auth';
 import type { RestoreBody, SaveVersionBody, VersionDetail, VersionSummary } from '@/shared/api/designs';
-import { analyze } from '@/shared/analysis/analyze';
-import { summarize } from '@/shared/analysis/summary';
-import type { Report } from '@/shared/analysis/types';
 import { diffTopologies, type TopologyDiff } from '@/shared/diff';
-import type { ReportSummary } from '@/shared/analysis/summary';
 import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import type { Models } from '@/server/models';
 import { fail, ok, type Failure, type Result } from '@/server/services/result';
 import { writeTransaction, type DesignDeps, type Within } from './deps';
 import { toVersionDetail, toVersionSummary } from './dto';
+import type { StoredReport } from '@/server/services/analysis';
 import { loadLabelHistory } from './labels';
-import { findVersion, loadDesignView, loadDocument, type DesignView, type VersionRecord } from './load';
+import { findVersion, loadDesignView, loadDocument, loadDocumentText, type DesignView, type VersionRecord } from './load';
 import { NO_SUCH_DESIGN, noSuchVersion } from './messages';
-import { appendVersion, latestNumber, prepareDocument, type PreparedDocument } from './write';
+import { appendVersion, latestNumber, type PreparedDocument } from './write';
 
 /** A version the viewer may open, with its design; or the 404 that hides it. */
 async function openVersion(models: Models, viewer: User, id: number, n: number): Promise<Result<{ view: DesignView; record: VersionRecord }>> {
@@ -43,7 +40,7 @@ function conflict(latest: number | null): Failure {
 
 /** Versions of a design: read one, its report and a diff; save a new one; restore an old one as a new one. */
 export function createVersionService(deps: DesignDeps) {
-  const { models, now } = deps;
+  const { models, now, analysis } = deps;
 
   /** Write the next version and answer it; a lost race on the unique index is a conflict, not an error. */
   async function write(
@@ -85,13 +82,20 @@ export function createVersionService(deps: DesignDeps) {
       return ok(toVersionDetail(record, view.people, await storedTopology(models, record)));
     },
 
-    /** The full analysis, computed now from the stored document (the stored summary is what the list shows). */
-    async report(viewer: User, id: number, n: number): Promise<Result<{ report: Report; summary: ReportSummary }>> {
+    /**
+     * The full analysis as JSON text: the report stored with the version when it was saved. A version
+     * saved before reports were stored has none; its document is analysed again in the analysis pool
+     * on each request, and nothing is written back (versions never change).
+     */
+    async report(viewer: User, id: number, n: number): Promise<Result<StoredReport>> {
       const opened = await openVersion(models, viewer, id, n);
       if (!opened.ok) return opened;
-      const doc = await storedTopology(models, opened.value.record);
-      const report = analyze(doc);
-      return ok({ report, summary: summarize(report, doc) });
+      const { row } = opened.value.record;
+      const stored = await models.DesignVersion.findByPk(row.id, { attributes: ['id', 'report'] });
+      if (stored?.report) return ok({ summary: JSON.parse(row.summary) as StoredReport['summary'], reportJson: stored.report });
+      const computed = await analysis.report(await loadDocumentText(models, row.id));
+      if (!computed.ok && computed.kind === 'invalid') throw new Error(`stored version ${row.id} no longer validates: ${computed.message}`);
+      return computed;
     },
 
     /** What changed going from version `against` to version `n`: `against` is the before side, `n` the after side. */
@@ -108,20 +112,22 @@ export function createVersionService(deps: DesignDeps) {
       // Editors see every design of their team, so one indexed lookup answers "is it theirs?".
       const own = await models.Design.findOne({ where: { id, teamId: viewer.teamId }, attributes: ['id'], transaction: within.transaction });
       if (!own) return fail('not-found', NO_SUCH_DESIGN);
-      const prepared = prepareDocument(body.document, await loadLabelHistory(models, id, within.transaction));
+      const prepared = await analysis.prepare(body.document, await loadLabelHistory(models, id, within.transaction));
       if (!prepared.ok) return prepared;
       return write(viewer, id, { message: body.message, prepared: prepared.value, baseVersion: body.baseVersion }, within);
     },
 
     /**
      * Make version `n`'s document the newest version again, on top of whatever is latest now (no base
-     * check: restoring does not build on what the client had open). The analysis is run afresh.
+     * check: restoring does not build on what the client had open). The analysis is run afresh, in the
+     * analysis pool, so the new version's report is today's analysis of that document.
      */
     async restore(viewer: User, id: number, n: number, body: RestoreBody): Promise<Result<VersionSummary>> {
       const opened = await openVersion(models, viewer, id, n);
       if (!opened.ok) return opened;
-      const prepared = prepareDocument(await storedTopology(models, opened.value.record), await loadLabelHistory(models, id));
-      if (!prepared.ok) throw new Error(`stored version ${n} of design ${id} no longer validates`);
+      const prepared = await analysis.prepareJson(await loadDocumentText(models, opened.value.record.row.id), await loadLabelHistory(models, id));
+      if (!prepared.ok && prepared.kind === 'invalid') throw new Error(`stored version ${n} of design ${id} no longer validates`);
+      if (!prepared.ok) return prepared;
       return write(viewer, id, { message: body.message, prepared: prepared.value }, {});
     },
   };

@@ -20,7 +20,7 @@ function listItem(id: number, name: string, status: DesignListItem['status'], n:
     site: 'Harbor Road server room',
     status,
     latestVersion: latest && { number: latest.number, createdAt: latest.createdAt, summary: latest.summary, review: status },
-    approvedVersion: status === 'approved' && latest ? { number: latest.number, approvedAt: '2026-11-26T15:00:00.000Z' } : null,
+    approvedVersion: latest && status === 'approved' ? { number: latest.number, approvedAt: '2026-11-26T15:00:00.000Z' } : null,
     updatedAt: '2026-11-26T15:00:00.000Z',
   };
 }
@@ -34,7 +34,8 @@ function serve(designs: DesignListItem[]) {
     if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [], invitations: [] };
     if (path.startsWith('/api/designs')) {
       const q = new URLSearchParams(path.split('?')[1] ?? '').get('q');
-      return { designs: q ? designs.filter((d) => d.name.toLowerCase().includes(q.toLowerCase())) : designs };
+      const matching = q ? designs.filter((d) => d.name.toLowerCase().includes(q.toLowerCase())) : designs;
+      return { designs: matching, nextCursor: null, total: matching.length };
     }
     throw new Error(`unexpected request ${path}`);
   });
@@ -109,6 +110,23 @@ describe('designs screen', () => {
     await waitFor(() => expect(get).toHaveBeenCalledWith('/api/designs?q=annex'));
     await waitFor(() => expect(screen.queryByTestId('design-1')).toBeNull());
     expect(screen.getByTestId('designs-count')).toHaveTextContent('1 matching “annex”');
+  });
+
+  it('counts every design, shows the first page, and loads the next page on request', async () => {
+    get.mockImplementation(async (path: string) => {
+      if (path === '/api/team') return { team: { id: 1, name: 'Tidewater Cold Storage' }, members: [], invitations: [] };
+      if (path === '/api/designs') return { designs: [HARBOR, FLAWED], nextCursor: '1764650000000.2', total: 3 };
+      if (path === '/api/designs?cursor=1764650000000.2') return { designs: [EMPTY], nextCursor: null, total: 3 };
+      throw new Error(`unexpected request ${path}`);
+    });
+    renderList(people.designer);
+    await screen.findByTestId('design-2');
+    expect(screen.getByTestId('designs-count')).toHaveTextContent('3 designs, 2 shown');
+    expect(screen.queryByTestId('design-3')).toBeNull();
+    fireEvent.press(screen.getByTestId('designs-more'));
+    expect(await screen.findByTestId('design-3')).toBeOnTheScreen();
+    expect(screen.getByTestId('designs-count')).toHaveTextContent(/^3 designs$/);
+    expect(screen.queryByTestId('designs-more')).toBeNull();
   });
 
   it('invites a designer to start the first design when the team has none', async () => {

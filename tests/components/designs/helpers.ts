@@ -44,6 +44,7 @@ export const harborDesign: DesignDto = {
   name: 'Harbor Road storage',
   site: 'Harbor Road server room',
   status: 'approved',
+  latestVersion: { number: 2, createdAt: '2026-11-12T09:00:00.000Z', summary: summarize(analyze(docs.v2), docs.v2), review: 'approved' },
   approvedVersion: { number: 2, approvedAt: '2026-11-26T15:00:00.000Z' },
   createdAt: '2026-11-11T09:00:00.000Z',
   updatedAt: '2026-11-26T15:00:00.000Z',

@@ -25,6 +25,16 @@ export const TEST_ENV: Record<string, string> = {
 
 export const APP_ORIGIN = 'http://localhost:8090';
 
+/** What production requires (server/config.ts): a long session secret, real bcrypt cost, an https APP_URL. */
+export const PRODUCTION_ENV: Record<string, string> = {
+  NODE_ENV: 'production',
+  SESSION_SECRET: 'p'.repeat(40),
+  BCRYPT_COST: '10',
+  SEED: 'none',
+  APP_URL: 'https://cablewright.example',
+};
+export const PRODUCTION_ORIGIN = 'https://cablewright.example';
+
 /** The demo people by the role the tests sign in as (product.md's Tidewater team, plus Quayside's Sam). */
 export const DEMO = {
   admin: 'maya@tidewater.example',
@@ -49,18 +59,20 @@ export type TestApp = {
  * A migrated app; `seed` (default true) adds the demo teams, people and designs, `'people'` only the
  * teams and people (quicker, for tests that never look at a design). In memory unless
  * `databasePath` names a file (for what only a file database shows: WAL, several connections).
+ * `clock` replaces Date.now for the sign-in limits, so a test can step past a wait.
  */
 export async function makeTestApp({
   env = {},
   seed = true,
   databasePath = ':memory:',
-}: { env?: Record<string, string>; seed?: boolean | 'people'; databasePath?: string } = {}): Promise<TestApp> {
+  clock,
+}: { env?: Record<string, string>; seed?: boolean | 'people'; databasePath?: string; clock?: () => number } = {}): Promise<TestApp> {
   const config = loadConfig({ ...TEST_ENV, ...env });
   const sequelize = await openDatabase(databasePath);
   await migrate(sequelize);
   if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost), { designs: seed !== 'people' });
   const mailer = await createMailer(config);
-  const app = createApp({ sequelize, mailer, config });
+  const app = createApp({ sequelize, mailer, config, clock });
   return {
     app,
     sequelize,
