@@ -19,6 +19,7 @@ const envSchema = z.object({
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
   WEB_DIR: z.string().trim().min(1).optional(),
   WEB_DEV_SERVER: z.url({ protocol: /^https?$/, error: 'use an http:// URL such as http://localhost:8081' }).optional(),
+  PHOTOS_DIR: z.string().trim().min(1).optional(),
 });
 
 export type MailConfig = { kind: 'fake' } | { kind: 'smtp'; url: string };
@@ -42,6 +43,11 @@ export type Config = {
   webDir: string;
   /** `npm run dev`: pages come from Expo's dev server through this app, so the browser sees one origin. */
   webDevServer: string | null;
+  /**
+   * Folder of the build record's photos (absolute): PHOTOS_DIR, else `photos/` beside the database
+   * file. Null with DATABASE_PATH=:memory: and no PHOTOS_DIR: a temporary folder is made on first use.
+   */
+  photosDir: string | null;
 };
 
 /** Expo's dev server (npm run dev) calls the API from this origin. */
@@ -81,6 +87,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   if (isProduction && e.WEB_DEV_SERVER) {
     problems.push('WEB_DEV_SERVER: only for development; production serves the exported web app');
   }
+  const webDir = path.resolve(e.WEB_DIR ?? 'dist/web');
+  const photosDir = photoFolder(e.PHOTOS_DIR, e.DATABASE_PATH);
+  if (photosDir && isInside(photosDir, webDir)) {
+    problems.push('PHOTOS_DIR: must not be inside the web app folder (WEB_DIR), where it would be served to anyone');
+  }
   if (problems.length > 0) throw new ConfigError(problems);
 
   const appUrl = (e.APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
@@ -97,9 +108,20 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     appUrl,
     trustedOrigins,
     bcryptCost,
-    webDir: path.resolve(e.WEB_DIR ?? 'dist/web'),
+    webDir,
     webDevServer: e.WEB_DEV_SERVER ?? null,
+    photosDir,
   };
+}
+
+function photoFolder(photosDir: string | undefined, databasePath: string): string | null {
+  if (photosDir) return path.resolve(photosDir);
+  return databasePath === ':memory:' ? null : path.resolve(path.dirname(databasePath), 'photos');
+}
+
+function isInside(folder: string, parent: string): boolean {
+  const relative = path.relative(parent, folder);
+  return relative === '' || (!relative.startsWith('..') && !path.isAbsolute(relative));
 }
 
 /** For entry points: a bad environment prints what is wrong and exits instead of throwing a stack trace. */

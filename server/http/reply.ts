@@ -9,6 +9,8 @@ const STATUS: Record<FailureKind, number> = {
   unauthorized: 401,
   // The mail relay or another service we depend on failed (RFC 9110 §15.6.3 502 Bad Gateway).
   unavailable: 502,
+  // An upload whose content is not a type the route takes (RFC 9110 §15.5.16 415 Unsupported Media Type).
+  'unsupported-type': 415,
 };
 
 /** Send a service result: `status` with `shape(value)` on success (no body for 204), the mapped error otherwise. */

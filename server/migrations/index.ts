@@ -4,6 +4,7 @@ import * as invitations from './0002-invitations';
 import * as sessions from './0003-sessions';
 import * as memberSoftRemoval from './0004-member-soft-removal';
 import * as designsAndVersions from './0005-designs-and-versions';
+import * as buildRecord from './0010-build-record';
 
 /**
  * Every migration, in order. To add one: create `NNNN-what-it-does.ts` exporting `up` and `down`,
@@ -15,4 +16,5 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, module: Migration
   ['0003-sessions', sessions],
   ['0004-member-soft-removal', memberSoftRemoval],
   ['0005-designs-and-versions', designsAndVersions],
+  ['0010-build-record', buildRecord],
 ];

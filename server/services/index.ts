@@ -1,7 +1,9 @@
 import { createAuthService } from './auth';
+import { createBuildServices } from './build';
 import type { ServiceDeps } from './deps';
 import { createDesignServices } from './designs';
 import { createInvitationService } from './invitations';
+import { createPhotoStore } from './photos/store';
 import { createTeamService } from './team';
 
 /** All services of one app instance. */
@@ -11,6 +13,7 @@ export function createServices(deps: ServiceDeps) {
     team: createTeamService(deps),
     invitations: createInvitationService(deps),
     ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date() }),
+    ...createBuildServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), photos: createPhotoStore(deps.config.photosDir) }),
   };
 }
 

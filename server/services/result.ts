@@ -1,7 +1,7 @@
 import type { Issue } from '@/shared/api/common';
 
 /** What can go wrong in a service, independent of HTTP; routes map each kind to a status (server/http/reply.ts). */
-export type FailureKind = 'invalid' | 'not-found' | 'conflict' | 'forbidden' | 'unauthorized' | 'unavailable';
+export type FailureKind = 'invalid' | 'not-found' | 'conflict' | 'forbidden' | 'unauthorized' | 'unavailable' | 'unsupported-type';
 
 /**
  * `issues` point at the request's fields (for `invalid`); `details` are extra fields of the error body,
