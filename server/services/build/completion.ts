@@ -3,7 +3,7 @@ import type { User } from '@/shared/api/auth';
 import { buildCompleteEmail } from '@/server/mail/build-email';
 import type { Mailer } from '@/server/mail/mailer';
 import type { BuildCompletionRow, Models, UserRow } from '@/server/models';
-import type { VersionPlan } from './checklist';
+import type { VersionPlan } from './version-cache';
 import { isComplete } from './latest';
 import type { OpenedBuild } from './open';
 

@@ -5,7 +5,7 @@ import type { BuildMarkRow, BuildStepMarkRow } from '@/server/models';
 import { writeTransaction } from '@/server/services/designs/deps';
 import { fail, invalid, ok, type Result } from '@/server/services/result';
 import type { BuildDeps } from './deps';
-import type { VersionPlan } from './checklist';
+import type { VersionPlan } from './version-cache';
 import { announceCompletion, recordCompletion } from './completion';
 import { loadPeople, toCableMark, toStepMark } from './dto';
 import { openForMarking, type OpenedBuild } from './open';
@@ -67,9 +67,9 @@ export function createMarkService(deps: BuildDeps) {
 
   return {
     async markCable(viewer: User, id: number, n: number, body: ParsedMarkBody): Promise<Result<Written<CableMark>>> {
-      const opened = await openForMarking(models, viewer, id, n);
+      const opened = await openForMarking(deps, viewer, id, n);
       if (!opened.ok) return opened;
-      const plan = deps.plans(opened.value.record.row.id, opened.value.doc);
+      const plan = deps.versions.plan(opened.value.record.row.id, opened.value.doc);
       if (!plan.cableIds.has(body.cableId)) return invalid([{ path: 'cableId', message: `Version ${n} has no cable ${JSON.stringify(body.cableId)}` }]);
       const { record, view } = opened.value;
       const note = body.note || null;
@@ -88,9 +88,9 @@ export function createMarkService(deps: BuildDeps) {
     },
 
     async markStep(viewer: User, id: number, n: number, body: ParsedStepBody): Promise<Result<Written<StepMark>>> {
-      const opened = await openForMarking(models, viewer, id, n);
+      const opened = await openForMarking(deps, viewer, id, n);
       if (!opened.ok) return opened;
-      const plan = deps.plans(opened.value.record.row.id, opened.value.doc);
+      const plan = deps.versions.plan(opened.value.record.row.id, opened.value.doc);
       if (!plan.stepIds.has(body.stepId)) return invalid([{ path: 'stepId', message: `Version ${n}'s bring-up checklist has no step ${JSON.stringify(body.stepId)}` }]);
       const { record, view } = opened.value;
       const note = body.note || null;

@@ -4,21 +4,21 @@ import { buildProgress } from '@/shared/build/progress';
 import { emptyRecord, ownValue, type IdRecord } from '@/shared/keys/record';
 import type { Models } from '@/server/models';
 import { toPerson } from '@/server/services/designs/dto';
-import type { PlanCache } from './checklist';
 import { loadPeople, toPhoto } from './dto';
 import { latestCableMarks, latestStepMarks } from './latest';
 import { supersededBy, type OpenedBuild } from './open';
+import type { VersionCache } from './version-cache';
 
 /**
  * The whole build record of a version as GET …/build answers it: every cable and step with its
  * current state, the checklist, the photos per cable and per rack, progress and completion.
  * Records are keyed by ids (user text), so they are made without a prototype.
  */
-export async function readRecord(deps: { models: Models; sequelize: Sequelize; plans: PlanCache }, opened: OpenedBuild): Promise<BuildRecord> {
+export async function readRecord(deps: { models: Models; sequelize: Sequelize; versions: VersionCache }, opened: OpenedBuild): Promise<BuildRecord> {
   const { models, sequelize } = deps;
   const { view, record, doc } = opened;
   const versionId = record.row.id;
-  const plan = deps.plans(versionId, doc);
+  const plan = deps.versions.plan(versionId, doc);
   const [marks, stepMarks, photos, completion] = await Promise.all([
     latestCableMarks(models, sequelize, versionId),
     latestStepMarks(models, sequelize, versionId),

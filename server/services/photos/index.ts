@@ -25,7 +25,7 @@ export function createPhotoService(deps: BuildDeps) {
 
   return {
     async upload(viewer: User, id: number, n: number, fields: PhotoFields, file: UploadedFile | undefined): Promise<Result<Photo>> {
-      const opened = await openForMarking(models, viewer, id, n);
+      const opened = await openForMarking(deps, viewer, id, n);
       if (!opened.ok) return opened;
       const { doc, record, view } = opened.value;
       if (!file) return invalid([{ path: 'photo', message: 'Attach the image in the multipart field "photo"' }]);
