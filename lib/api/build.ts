@@ -1,9 +1,9 @@
 import { onlineManager, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { useStore } from 'zustand';
-import type { BuildResponse, HistoryResponse, MarkBody, MarkResponse, PhotoResponse, StepBody, StepMarkResponse } from '@/shared/api/build';
+import type { BuildResponse, ChecklistResponse, HistoryResponse, MarkBody, MarkResponse, PhotoResponse, StepBody, StepMarkResponse } from '@/shared/api/build';
 import { api } from '@/lib/api/client';
-import { designKeys } from '@/lib/api/designs';
+import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useMe } from '@/lib/api/auth';
 import { useSessionPending } from '@/lib/api/session-gate';
 import { withPending, type ShownRecord } from '@/lib/build/pending';
@@ -18,6 +18,7 @@ import { createBuildQueue, defaultQueueStorage, requestOf, type BuildQueue, type
 export const buildKeys = {
   record: (id: number, n: number) => [...designKeys.version(id, n), 'build'] as const,
   history: (id: number, n: number) => [...buildKeys.record(id, n), 'history'] as const,
+  checklist: (id: number, n: number) => [...designKeys.version(id, n), 'checklist'] as const,
 };
 
 /** Teammates mark cables while someone watches: the record is looked at again every half minute. */
@@ -34,6 +35,18 @@ export function useBuild(id: number, n: number, options: { enabled?: boolean } =
     select: (data) => data.build,
     staleTime: BUILD_STALE_MS,
     refetchInterval: BUILD_REFETCH_MS,
+    enabled: !pending && (options.enabled ?? true),
+  });
+}
+
+/** The version's bring-up checklist: it never changes, so it is fetched once and kept. */
+export function useChecklist(id: number, n: number, options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
+  return useQuery({
+    queryKey: buildKeys.checklist(id, n),
+    queryFn: () => api.get<ChecklistResponse>(`/api/designs/${id}/versions/${n}/build/checklist`),
+    select: (data) => data.checklist,
+    staleTime: VERSION_STALE_MS,
     enabled: !pending && (options.enabled ?? true),
   });
 }

@@ -27,6 +27,11 @@ export function buildRoutes({ build, photos }: Services): Router {
     reply(res, await build.record(currentUser(req), id, n), 200, (record) => ({ build: record }));
   });
 
+  router.get('/:id/versions/:n/build/checklist', read, one, async (req, res) => {
+    const { id, n } = one.input(req).params;
+    reply(res, await build.checklist(currentUser(req), id, n), 200, (checklist) => ({ checklist }));
+  });
+
   router.get('/:id/versions/:n/build/history', read, one, async (req, res) => {
     const { id, n } = one.input(req).params;
     reply(res, await build.history(currentUser(req), id, n), 200, (marks) => ({ marks }));

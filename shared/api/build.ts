@@ -128,10 +128,8 @@ export type BuildRecord = {
   supersededBy: { number: number; approvedAt: string } | null;
   /** Every cable of the version, by cable id. */
   cables: IdRecord<CableStatus>;
-  /** Every bring-up step of the version (`checklist`), by step id. */
+  /** Every bring-up step of the version's checklist (GET …/build/checklist), by step id. */
   steps: IdRecord<StepStatus>;
-  /** The bring-up checklist, in order (shared/build/steps.ts). */
-  checklist: Step[];
   photos: { cables: IdRecord<Photo[]>; racks: IdRecord<Photo[]> };
   progress: BuildProgress;
   /** Every cable tested and every step done. */
@@ -142,6 +140,12 @@ export type BuildRecord = {
 
 /** GET …/versions/:n/build */
 export type BuildResponse = { build: BuildRecord };
+/**
+ * GET …/versions/:n/build/checklist — the bring-up steps in order (shared/build/steps.ts). A version
+ * never changes, so neither does its checklist: fetch it once. It is apart from the record, which is
+ * read again and again while people mark, because it is large for a large design (the steps' text).
+ */
+export type ChecklistResponse = { checklist: Step[] };
 /** POST …/build/marks — 201 for a new mark, 200 with the stored one when its clientId was seen before. */
 export type MarkResponse = { mark: CableMark };
 /** POST …/build/steps — the same rules. */

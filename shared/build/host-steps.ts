@@ -13,10 +13,11 @@ import type { Step, StepContext, StepKind } from './types';
  */
 export function hostSteps(ctx: StepContext): Step[] {
   const hosts = byName(ctx.doc.devices.filter((d): d is HostDevice => d.kind === 'host'));
-  return hosts.flatMap((host) => stepsOf(ctx, host));
+  const all = portalsByArray(ctx);
+  return hosts.flatMap((host) => stepsOf(ctx, all, host));
 }
 
-function stepsOf(ctx: StepContext, host: HostDevice): Step[] {
+function stepsOf(ctx: StepContext, all: Map<string, Portals>, host: HostDevice): Step[] {
   const name = displayName(host);
   const ports = portsOf(ctx, host, 'data');
   const planned = (ctx.planned.get(host.id) ?? []).filter((r) => r.sessions > 0);
@@ -44,7 +45,7 @@ function stepsOf(ctx: StepContext, host: HostDevice): Step[] {
     const detail = `The design uses ${who}. Enter ${name}'s secrets from the team's CHAP secrets; never write a secret in a note or show it in a photo.`;
     steps.push(make('chap', `Set CHAP on ${name}`, detail, 'RFC 7143 §9.2'));
   }
-  steps.push(make('discovery', `Discover ${name}'s target portals`, discoveryText(ctx, name, ports, planned), 'RFC 7143 §15'));
+  steps.push(make('discovery', `Discover ${name}'s target portals`, discoveryText(all, name, ports, planned), 'RFC 7143 §15'));
   steps.push(make('login', `Log ${name} in: ${plural(expected, 'session')}`, loginText(ctx, name, planned, expected), 'the analysis', [host.id], expected));
   steps.push(make('multipath', `Check multipath on ${name}`, multipathText(ctx, name, planned, expected), 'the analysis', [host.id], expected));
   return steps;
@@ -59,32 +60,49 @@ function initiatorText(host: HostDevice): string {
   );
 }
 
-/** A controller port pairs with a host port on its network; a side without a network pairs with any (as the analysis reads it). */
-function sameNetwork(hostNetworks: ReadonlySet<string | undefined>, networkId: string | undefined): boolean {
-  return networkId === undefined || hostNetworks.has(undefined) || hostNetworks.has(networkId);
+/** An array's portals grouped by the network of their port (undefined: a port on no network). */
+type Portals = Map<string | undefined, string[]>;
+
+/** Each array's portals, worked out once for all hosts (a host reads only its own networks' lists). */
+function portalsByArray(ctx: StepContext): Map<string, Portals> {
+  const out = new Map<string, Portals>();
+  for (const array of ctx.doc.devices) {
+    if (array.kind !== 'array') continue;
+    const groups: Portals = new Map();
+    for (const controller of array.controllers) {
+      for (const port of controller.ports) {
+        if (port.role !== 'data' || !port.address) continue;
+        const text = port.address.mode === 'static' ? portalText(port.address.ip) : `${displayName(controller)} ${displayName(port)} (address from DHCP)`;
+        const list = groups.get(port.networkId);
+        if (list) list.push(text);
+        else groups.set(port.networkId, [text]);
+      }
+    }
+    out.set(array.id, groups);
+  }
+  return out;
 }
 
-/** The arrays' data ports a host discovers: those on the same network as one of its data ports. */
-function portals(ctx: StepContext, ports: readonly PortRef[], planned: readonly HostArrayResult[]): string[] {
+/**
+ * The arrays' portals a host discovers: those on the same network as one of its data ports; a side
+ * without a network pairs with any (as the analysis reads it).
+ */
+function portals(all: Map<string, Portals>, ports: readonly PortRef[], planned: readonly HostArrayResult[]): string[] {
   const networks = new Set(ports.map((p) => p.port.networkId));
   const out: string[] = [];
   for (const result of planned) {
-    const array = ctx.index.devices.get(result.array);
-    if (array?.kind !== 'array') continue;
-    for (const controller of array.controllers) {
-      for (const port of controller.ports) {
-        if (port.role !== 'data' || !port.address || !sameNetwork(networks, port.networkId)) continue;
-        const where = port.address.mode === 'static' ? portalText(port.address.ip) : `${displayName(controller)} ${displayName(port)} (address from DHCP)`;
-        out.push(where);
-      }
+    const groups = all.get(result.array);
+    if (!groups) continue;
+    for (const [networkId, list] of groups) {
+      if (networkId === undefined || networks.has(undefined) || networks.has(networkId)) out.push(...list);
     }
   }
   return out;
 }
 
-function discoveryText(ctx: StepContext, name: string, ports: readonly PortRef[], planned: readonly HostArrayResult[]): string {
+function discoveryText(all: Map<string, Portals>, name: string, ports: readonly PortRef[], planned: readonly HostArrayResult[]): string {
   if (planned.length === 0) return `The analysis plans no sessions for ${name}, so there is nothing to discover. Tell the designer before going on.`;
-  const found = portals(ctx, ports, planned);
+  const found = portals(all, ports, planned);
   const list = found.length > 0 ? `: ${listText(found)}` : '';
   return `From ${name}, send discovery to the target portals on its storage networks (TCP port 3260)${list}. Each one should answer with its target name.`;
 }

@@ -33,6 +33,7 @@ const WRITES: Record<string, Call> = {
 const READS: Record<string, Call> = {
   'GET build': (a, n) => a.get(buildPath(id, n)),
   'GET build/history': (a, n) => a.get(buildPath(id, n, '/history')),
+  'GET build/checklist': (a, n) => a.get(buildPath(id, n, '/checklist')),
 };
 
 describe.each(Object.entries(WRITES))('%s', (_name, call) => {

@@ -1,5 +1,6 @@
 import type { User } from '@/shared/api/auth';
 import type { BuildRecord, HistoryEntry } from '@/shared/api/build';
+import type { Step } from '@/shared/build';
 import { createPhotoService } from '@/server/services/photos';
 import type { PhotoStore } from '@/server/services/photos/store';
 import type { DesignDeps } from '@/server/services/designs/deps';
@@ -24,6 +25,13 @@ export function createBuildServices(input: DesignDeps & { photos: PhotoStore }) 
         const opened = await openBuild(deps, viewer, id, n);
         if (!opened.ok) return opened;
         return ok(await readRecord({ models, sequelize, versions: deps.versions }, opened.value));
+      },
+
+      /** The version's bring-up checklist (the same for every read of it). */
+      async checklist(viewer: User, id: number, n: number): Promise<Result<Step[]>> {
+        const opened = await openBuild(deps, viewer, id, n);
+        if (!opened.ok) return opened;
+        return ok(deps.versions.plan(opened.value.record.row.id, opened.value.doc).steps);
       },
 
       async history(viewer: User, id: number, n: number): Promise<Result<HistoryEntry[]>> {

@@ -11,7 +11,7 @@ import type { VersionCache } from './version-cache';
 
 /**
  * The whole build record of a version as GET …/build answers it: every cable and step with its
- * current state, the checklist, the photos per cable and per rack, progress and completion.
+ * current state, the photos per cable and per rack, progress and completion.
  * Records are keyed by ids (user text), so they are made without a prototype.
  */
 export async function readRecord(deps: { models: Models; sequelize: Sequelize; versions: VersionCache }, opened: OpenedBuild): Promise<BuildRecord> {
@@ -47,7 +47,6 @@ export async function readRecord(deps: { models: Models; sequelize: Sequelize; v
     supersededBy: supersededBy(view, record.row.number),
     cables,
     steps,
-    checklist: plan.steps,
     photos: groupPhotos(photos.map((p) => toPhoto(p, people))),
     progress,
     complete: progress.cables.done === progress.cables.total && progress.steps.done === progress.steps.total,

@@ -16,7 +16,6 @@ function record(): BuildRecord {
     supersededBy: null,
     cables,
     steps,
-    checklist: [],
     photos: { cables: emptyRecord(), racks: emptyRecord() },
     progress: { cables: { done: 0, total: 3 }, steps: { done: 0, total: 1 }, states: { 'not-started': 3, run: 0, tested: 0, problem: 0 }, racks: [] },
     complete: false,
