@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { rmSync } from 'node:fs';
 import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -26,12 +27,17 @@ export function isStoredName(name: string): boolean {
   return STORED_NAME.test(name);
 }
 
+/** The photos of an in-memory database go with it: the folder is removed when the process exits. */
+async function temporaryFolder(): Promise<string> {
+  const folder = await mkdtemp(path.join(tmpdir(), 'cablewright-photos-'));
+  process.once('exit', () => rmSync(folder, { recursive: true, force: true }));
+  return folder;
+}
+
 export function createPhotoStore(configured: string | null): PhotoStore {
   let ready: Promise<string> | null = null;
   const folder = () => {
-    ready ??= configured
-      ? mkdir(configured, { recursive: true, mode: 0o700 }).then(() => configured)
-      : mkdtemp(path.join(tmpdir(), 'cablewright-photos-'));
+    ready ??= configured ? mkdir(configured, { recursive: true, mode: 0o700 }).then(() => configured) : temporaryFolder();
     return ready;
   };
   const pathOf = async (storedName: string) => {
