@@ -4,7 +4,7 @@ import { displayName } from '@/shared/topology/index';
 import type { Device } from '@/shared/topology/schema';
 import type { StepContext, StepKind } from './types';
 
-/** Small helpers the step builders share. */
+/** Small functions the step builders share. */
 export function stepId(kind: StepKind, ...ids: string[]): string {
   return tupleKey([kind, ...ids]);
 }

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import piexif from 'piexifjs';
 import type { Agent } from './app';
 
-/** Helpers for the build record tests: paths, marks, and small real images. */
+/** For the build record tests: paths, marks, and small real images. */
 export const buildPath = (id: number, n: number, rest = '') => `/api/designs/${id}/versions/${n}/build${rest}`;
 
 export const newClientId = () => randomUUID();
