@@ -141,6 +141,7 @@ export type QueueOptions = {
 
 export function createBuildQueue({ storage = null, newId = newClientId, now = () => new Date() }: QueueOptions = {}): BuildQueue {
   let running: Promise<FlushReport> | null = null;
+  let again = false;
   return createStore<BuildQueueState>()(
     persist(
       (set, get) => {
@@ -214,9 +215,27 @@ export function createBuildQueue({ storage = null, newId = newClientId, now = ()
             if (item?.status === 'refused') update(clientId, { status: 'waiting', error: null });
           },
           flush(send, userId) {
-            running ??= run(send, userId).finally(() => {
-              running = null;
-            });
+            // A call while a flush runs joins it, and makes it look again before it ends: the item that
+            // call was made for may have been queued after the running flush's last look.
+            if (running) {
+              again = true;
+              return running;
+            }
+            running = (async () => {
+              const report: FlushReport = { sent: [], refused: [], stopped: null };
+              try {
+                do {
+                  again = false;
+                  const round = await run(send, userId);
+                  report.sent.push(...round.sent);
+                  report.refused.push(...round.refused);
+                  report.stopped = round.stopped;
+                } while (again && report.stopped === null);
+              } finally {
+                running = null;
+              }
+              return report;
+            })();
             return running;
           },
         };

@@ -162,6 +162,17 @@ describe('sending', () => {
     expect(queue.getState().flushing).toBe(false);
   });
 
+  it('looks again when a mark is queued while a flush is finishing, so the new mark does not wait for the next one', async () => {
+    const queue = createBuildQueue({ newId: ids });
+    const server = fakeServer();
+    const first = queue.getState().flush(server.send, INES.userId); // nothing to send yet
+    const item = queue.getState().enqueueMark(INES, { cableId: 'cable-a-01', state: 'run' });
+    const second = queue.getState().flush(server.send, INES.userId);
+    expect(second).toBe(first);
+    expect((await second).sent).toEqual([item.clientId]);
+    expect(queue.getState().items).toEqual([]);
+  });
+
   it('sends only the signed-in account’s marks; another account’s wait for them', async () => {
     const queue = createBuildQueue({ newId: ids });
     const server = fakeServer();
