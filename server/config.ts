@@ -26,6 +26,7 @@ const envSchema = z.object({
   ANALYSIS_TIMEOUT_MS: z.coerce.number({ error: 'use a number of milliseconds' }).int().min(10).max(600_000).default(15_000),
   ANALYSIS_MAX_OLD_MB: z.coerce.number({ error: 'use a number of megabytes' }).int().min(32).max(16_384).default(512),
   ANALYSIS_WORKERS: z.coerce.number({ error: 'use a whole number of processes' }).int().min(1).max(32).optional(),
+  PHOTOS_DIR: z.string().trim().min(1).optional(),
 });
 
 export type MailConfig = { kind: 'fake' } | { kind: 'smtp'; url: string };
@@ -56,6 +57,11 @@ export type Config = {
   trustProxy: string[];
   /** The analysis processes (server/analysis/pool.ts): per-task time and memory limits, and how many run at once. */
   analysis: { timeoutMs: number; maxOldMb: number; workers: number };
+  /**
+   * Folder of the build record's photos (absolute): PHOTOS_DIR, else `photos/` beside the database
+   * file. Null with DATABASE_PATH=:memory: and no PHOTOS_DIR: a temporary folder is made on first use.
+   */
+  photosDir: string | null;
 };
 
 /** Expo's dev server (npm run dev) calls the API from this origin. */
@@ -102,6 +108,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   }
   const trustProxy = parseTrustProxy(e.TRUST_PROXY, isProduction, problems);
   const extraOrigins = parseOrigins(e.TRUSTED_ORIGINS, problems);
+  const webDir = path.resolve(e.WEB_DIR ?? 'dist/web');
+  const photosDir = photoFolder(e.PHOTOS_DIR, e.DATABASE_PATH);
+  if (photosDir && isInside(photosDir, webDir)) {
+    problems.push('PHOTOS_DIR: must not be inside the web app folder (WEB_DIR), where it would be served to anyone');
+  }
   if (problems.length > 0) throw new ConfigError(problems);
 
   const appUrl = (e.APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
@@ -118,9 +129,10 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     appUrl,
     trustedOrigins,
     bcryptCost,
-    webDir: path.resolve(e.WEB_DIR ?? 'dist/web'),
+    webDir,
     webDevServer: e.WEB_DEV_SERVER ?? null,
     trustProxy,
+    photosDir,
     analysis: {
       timeoutMs: e.ANALYSIS_TIMEOUT_MS,
       maxOldMb: e.ANALYSIS_MAX_OLD_MB,
@@ -179,6 +191,16 @@ function parseOrigins(value: string | undefined, problems: string[]): string[] {
     else origins.push(url.origin);
   }
   return origins;
+}
+
+function photoFolder(photosDir: string | undefined, databasePath: string): string | null {
+  if (photosDir) return path.resolve(photosDir);
+  return databasePath === ':memory:' ? null : path.resolve(path.dirname(databasePath), 'photos');
+}
+
+function isInside(folder: string, parent: string): boolean {
+  const relative = path.relative(parent, folder);
+  return relative === '' || (!relative.startsWith('..') && !path.isAbsolute(relative));
 }
 
 /** For entry points: a bad environment prints what is wrong and exits instead of throwing a stack trace. */

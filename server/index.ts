@@ -7,6 +7,7 @@ import { createMailer } from './mail/mailer';
 import { migrate } from './migrate';
 import { seedDemo, type DemoAccount } from './seed';
 import { closeWorkbookPool } from './services/build-sheet/xlsx-pool';
+import { closePhotoPool } from './services/photos/photo-pool';
 import { createPasswords } from './services/passwords';
 
 export type RunningServer = { url: string; close: () => Promise<void> };
@@ -49,6 +50,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
       await mailer.close();
       await closeWorkbookPool();
       await closeSharedPools();
+      await closePhotoPool();
       await sequelize.close();
     },
   };

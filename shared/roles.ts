@@ -16,6 +16,8 @@ export const CAPABILITIES = {
   editDesigns: ['admin', 'designer'],
   review: ['admin', 'reviewer'],
   manageTeam: ['admin'],
+  /** Site work: mark cables and bring-up steps, attach photos (approved versions only). */
+  markBuild: ['admin', 'installer'],
 } as const satisfies Record<string, readonly Role[]>;
 export type Capability = keyof typeof CAPABILITIES;
 

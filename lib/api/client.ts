@@ -50,11 +50,28 @@ export async function apiRequest<T>(method: Method, path: string, body?: unknown
   return data as T;
 }
 
+/**
+ * A multipart upload (a photo): the browser sets the Content-Type with its boundary, so none is given
+ * here. Errors come back as for every other request.
+ */
+export async function apiUpload<T>(path: string, form: FormData): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(BASE_URL + path, { method: 'POST', credentials: 'include', headers: { Accept: 'application/json' }, body: form });
+  } catch {
+    throw new ApiRequestError(0, { error: 'Cablewright could not reach the server. Check the connection and try again.' });
+  }
+  const data = await readBody(response);
+  if (!response.ok) throw new ApiRequestError(response.status, data);
+  return data as T;
+}
+
 export const api = {
   get: <T>(path: string) => apiRequest<T>('GET', path),
   post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => apiRequest<T>('PATCH', path, body),
   delete: <T = void>(path: string) => apiRequest<T>('DELETE', path),
+  upload: <T>(path: string, form: FormData) => apiUpload<T>(path, form),
 };
 
 async function readBody(response: Response): Promise<unknown> {

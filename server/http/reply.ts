@@ -15,6 +15,8 @@ const STATUS: Record<FailureKind, number> = {
   'too-many': 429,
   // RFC 9110 §15.6.4 503 Service Unavailable: a temporary overload.
   busy: 503,
+  // An upload whose content is not a type the route takes (RFC 9110 §15.5.16 415 Unsupported Media Type).
+  'unsupported-type': 415,
 };
 
 /** Send a service result: `status` with `shape(value)` on success (no body for 204), the mapped error otherwise. */

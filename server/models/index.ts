@@ -1,4 +1,14 @@
 import type { ModelStatic, Sequelize } from 'sequelize';
+import {
+  defineBuildCompletion,
+  defineBuildMark,
+  defineBuildPhoto,
+  defineBuildStepMark,
+  type BuildCompletionRow,
+  type BuildMarkRow,
+  type BuildPhotoRow,
+  type BuildStepMarkRow,
+} from './build-record';
 import { defineDesign, type DesignRow } from './design';
 import { defineDesignVersion, type DesignVersionRow } from './design-version';
 import { defineInvitation, type InvitationRow } from './invitation';
@@ -7,7 +17,7 @@ import { defineTeam, type TeamRow } from './team';
 import { defineReviewEvent, type ReviewEventRow } from './review-event';
 import { defineUser, type UserRow } from './user';
 
-export type { DesignRow, DesignVersionRow, InvitationRow, ReviewEventRow, SessionRow, TeamRow, UserRow };
+export type { BuildCompletionRow, BuildMarkRow, BuildPhotoRow, BuildStepMarkRow, DesignRow, DesignVersionRow, InvitationRow, ReviewEventRow, SessionRow, TeamRow, UserRow };
 
 export type Models = {
   Team: ModelStatic<TeamRow>;
@@ -17,6 +27,10 @@ export type Models = {
   Design: ModelStatic<DesignRow>;
   DesignVersion: ModelStatic<DesignVersionRow>;
   ReviewEvent: ModelStatic<ReviewEventRow>;
+  BuildMark: ModelStatic<BuildMarkRow>;
+  BuildStepMark: ModelStatic<BuildStepMarkRow>;
+  BuildPhoto: ModelStatic<BuildPhotoRow>;
+  BuildCompletion: ModelStatic<BuildCompletionRow>;
 };
 
 const cache = new WeakMap<Sequelize, Models>();
@@ -36,6 +50,10 @@ export function getModels(sequelize: Sequelize): Models {
     Design: defineDesign(sequelize),
     DesignVersion: defineDesignVersion(sequelize),
     ReviewEvent: defineReviewEvent(sequelize),
+    BuildMark: defineBuildMark(sequelize),
+    BuildStepMark: defineBuildStepMark(sequelize),
+    BuildPhoto: defineBuildPhoto(sequelize),
+    BuildCompletion: defineBuildCompletion(sequelize),
   };
   models.Team.hasMany(models.User, { foreignKey: 'teamId', as: 'members' });
   models.User.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });

@@ -4,10 +4,12 @@ import type { Mailbox } from '@/server/mail/mailbox';
 import { apiNotFound } from '@/server/middleware/errors';
 import type { Services } from '@/server/services';
 import { authRoutes } from './auth';
+import { buildRoutes } from './build';
 import { buildSheetRoutes } from './build-sheet';
 import { designRoutes } from './designs';
 import { devMailRoutes } from './dev-mail';
 import { invitationRoutes } from './invitations';
+import { photoRoutes } from './photos';
 import { teamRoutes } from './team';
 import { versionRoutes } from './versions';
 
@@ -20,7 +22,8 @@ export function apiRoutes(services: Services, mailbox: Mailbox | null, config: C
   api.use('/auth', authRoutes(services, config));
   api.use('/team', teamRoutes(services));
   api.use('/invitations', invitationRoutes(services, config));
-  api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services));
+  api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services), buildRoutes(services));
+  api.use('/photos', photoRoutes(services));
   api.use('/dev/mail', devMailRoutes(mailbox));
   api.use(apiNotFound);
   return api;

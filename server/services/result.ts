@@ -13,7 +13,9 @@ export type FailureKind =
   /** Too many attempts of one kind; `details.retryAfterSeconds` says when to try again. */
   | 'too-many'
   /** The server cannot take more of this work right now (its queues are full). */
-  | 'busy';
+  | 'busy'
+  /** An upload whose content is not a type the route takes. */
+  | 'unsupported-type';
 
 /**
  * `issues` point at the request's fields (for `invalid`); `details` are extra fields of the error body,

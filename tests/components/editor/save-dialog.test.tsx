@@ -50,7 +50,8 @@ describe('saving a version', () => {
     renderWithClient(<SaveDialog designId={1} wide onClose={jest.fn()} onSaved={jest.fn()} onOpenVersion={jest.fn()} />, { user: demoUsers.designer });
     fireEvent.changeText(screen.getByTestId('save-message'), 'Rename wms-db-1');
     fireEvent.press(screen.getByTestId('save-submit'));
-    expect(await screen.findByTestId('save-conflict')).toHaveTextContent(/Theo Brandt saved version 3/);
+    // The panel appears with the 409 and names the author once version 3 has loaded: wait for both.
+    await waitFor(() => expect(screen.getByTestId('save-conflict')).toHaveTextContent(/Theo Brandt saved version 3/));
     const diff = await screen.findByTestId('diff-summary');
     expect(diff).toHaveTextContent(/design name: Harbor Road \(Theo\) → Harbor Road storage/);
     expect(diff).toHaveTextContent(/wms-db-1/);

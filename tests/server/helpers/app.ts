@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import type { Express } from 'express';
 import type { Sequelize } from 'sequelize';
 import request from 'supertest';
@@ -9,6 +12,7 @@ import { migrate } from '@/server/migrate';
 import { getModels, type Models } from '@/server/models';
 import { DEMO_PASSWORD, seedDemo } from '@/server/seed';
 import { createPasswords } from '@/server/services/passwords';
+import { closePhotoPool } from '@/server/services/photos/photo-pool';
 import type { Role } from '@/shared/roles';
 
 /** The environment of every test app: in-memory database, cheap hashes, the real fake mail sink. */
@@ -67,7 +71,9 @@ export async function makeTestApp({
   databasePath = ':memory:',
   clock,
 }: { env?: Record<string, string>; seed?: boolean | 'people'; databasePath?: string; clock?: () => number } = {}): Promise<TestApp> {
-  const config = loadConfig({ ...TEST_ENV, ...env });
+  // Each app keeps its photos in a folder of its own, removed again by close().
+  const photosDir = env.PHOTOS_DIR ? null : mkdtempSync(path.join(tmpdir(), 'cw-test-photos-'));
+  const config = loadConfig({ ...TEST_ENV, ...(photosDir ? { PHOTOS_DIR: photosDir } : {}), ...env });
   const sequelize = await openDatabase(databasePath);
   await migrate(sequelize);
   if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost), { designs: seed !== 'people' });
@@ -81,7 +87,9 @@ export async function makeTestApp({
     config,
     async close() {
       await mailer.close();
+      await closePhotoPool();
       await sequelize.close();
+      if (photosDir) rmSync(photosDir, { recursive: true, force: true });
     },
   };
 }
