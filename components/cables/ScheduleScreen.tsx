@@ -84,18 +84,33 @@ export function ScheduleScreen({ id, n }: { id: number; n: number }) {
         <QueryStatus query={schedule} what="The cable schedule" testID="schedule-error" />
         {rows ? (
           <>
-            <View style={wide ? styles.searchWide : undefined}>
-              <TextField
-                label="Find a cable"
-                hint="By label, device or port, e.g. HR-A-07, vault-1 or p12"
-                value={query}
-                onChangeText={setQuery}
-                autoCapitalize="none"
-                autoCorrect={false}
-                inputMode="search"
-                enterKeyHint="search"
-                testID="schedule-search"
-              />
+            <View style={wide ? styles.searchRow : undefined}>
+              <View style={wide ? styles.searchWide : undefined}>
+                <TextField
+                  label="Find a cable"
+                  hint="By label, device or port, e.g. HR-A-07, vault-1 or p12"
+                  value={query}
+                  onChangeText={setQuery}
+                  autoCapitalize="none"
+                  autoCorrect={false}
+                  inputMode="search"
+                  enterKeyHint="search"
+                  testID="schedule-search"
+                />
+              </View>
+              {wide ? (
+                <View style={styles.deviceFilter}>
+                  <TextField
+                    label="Device"
+                    hint="Either end"
+                    value={filters.device}
+                    onChangeText={(device) => setFilters((f) => ({ ...f, device }))}
+                    autoCapitalize="none"
+                    autoCorrect={false}
+                    testID="schedule-filter-device"
+                  />
+                </View>
+              ) : null}
             </View>
             {wide && choices ? (
               <View style={styles.filters} testID="schedule-filters">
@@ -120,16 +135,6 @@ export function ScheduleScreen({ id, n }: { id: number; n: number }) {
                   onChange={(media) => setFilters((f) => ({ ...f, media }))}
                   testID="schedule-filter-media"
                 />
-                <View style={styles.deviceFilter}>
-                  <TextField
-                    label="Device"
-                    value={filters.device}
-                    onChangeText={(device) => setFilters((f) => ({ ...f, device }))}
-                    autoCapitalize="none"
-                    autoCorrect={false}
-                    testID="schedule-filter-device"
-                  />
-                </View>
               </View>
             ) : null}
             <Text variant="small" color="inkMuted" aria-live="polite" testID="schedule-count">
@@ -172,9 +177,10 @@ const styles = StyleSheet.create({
   column: { width: '100%', maxWidth: 1280, alignSelf: 'center', paddingHorizontal: space.lg },
   top: { paddingTop: space.lg, paddingBottom: space.sm, gap: space.sm },
   links: { flexDirection: 'row', justifyContent: 'space-between', flexWrap: 'wrap', gap: space.sm },
-  searchWide: { maxWidth: 520 },
+  searchRow: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-end' },
+  searchWide: { flex: 2, maxWidth: 520 },
   filters: { gap: space.xs },
-  deviceFilter: { maxWidth: 320 },
+  deviceFilter: { flex: 1, maxWidth: 320 },
   listArea: { flex: 1, minHeight: 0, paddingBottom: space.lg },
   table: { flex: 1, borderWidth: 1, borderColor: colors.line, borderTopWidth: 0, backgroundColor: colors.surface },
   cards: { paddingBottom: space.xl },

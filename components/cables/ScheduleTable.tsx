@@ -75,7 +75,7 @@ export const ScheduleTableRow = memo(function ScheduleTableRow({ row, id, n }: {
   const values = cells(row);
   return (
     <Link href={cableHref(id, n, row.id)} asChild>
-      <Pressable role="link" aria-label={`${row.label}: ${values.near} to ${values.far}`} style={[styles.row, styles.body]} testID={`schedule-row-${row.id}`}>
+      <Pressable role="link" aria-label={`${row.label}: ${values.near} to ${values.far}`} style={ROW_STYLE} testID={`schedule-row-${row.id}`}>
         {TABLE_COLUMNS.map((column) => (
           <View key={column.key} style={{ flex: column.flex }}>
             <Text variant={column.key === 'label' ? 'smallStrong' : 'small'} numberOfLines={1}>
@@ -99,3 +99,6 @@ const styles = StyleSheet.create({
   underline: { textDecorationLine: 'underline' },
   chevron: { width: 18 },
 });
+
+/** One style object, not an array: `<Link asChild>` merges its child's style as an object (DEVELOPERS.md). */
+const ROW_STYLE = StyleSheet.flatten([styles.row, styles.body]);
