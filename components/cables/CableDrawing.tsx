@@ -1,5 +1,5 @@
 import { View } from 'react-native';
-import Svg, { G, Line, Rect, Text as SvgText } from 'react-native-svg';
+import Svg, { G, Path, Rect, Text as SvgText } from 'react-native-svg';
 import { colors, fonts } from '@/components/ui';
 import type { CableDrawingModel, DrawnDevice } from '@/lib/schedule/drawing';
 
@@ -74,20 +74,22 @@ export function CableDrawing({ model, label }: { model: CableDrawingModel; label
   const height = far.y + far.height + MARGIN;
   const a = near.ports.find((p) => p.lit);
   const b = far.ports.find((p) => p.lit);
+  const mid = near.y + near.height + PANEL_GAP / 2;
   const litName = (panel: Panel) => panel.ports.find((p) => p.lit)?.name ?? '';
   const description = `Drawing: ${model.near.name} port ${litName(near)} cabled to ${model.far.name} port ${litName(far)}`;
   return (
     <View role="img" aria-label={description} accessibilityLabel={description} testID="cable-drawing" style={{ width: '100%', maxWidth: 520, aspectRatio: WIDTH / height }}>
       <Svg width="100%" height="100%" viewBox={`0 0 ${WIDTH} ${height}`}>
+        {a && b ? (
+          // Drawn first: the opaque panels cover it, so the cable shows in the gap, leaving each marked port.
+          <Path d={`M${a.x + BOX / 2} ${a.y + BOX / 2}V${mid}H${b.x + BOX / 2}V${b.y + BOX / 2}`} stroke={colors.copper} strokeWidth={3} strokeLinejoin="round" fill="none" />
+        ) : null}
         <PanelView panel={near} testID="cable-drawing-near" />
         <PanelView panel={far} testID="cable-drawing-far" />
         {a && b ? (
-          <G>
-            <Line x1={a.x + BOX / 2} y1={a.y + BOX / 2} x2={b.x + BOX / 2} y2={b.y + BOX / 2} stroke={colors.copper} strokeWidth={3} strokeLinecap="round" />
-            <SvgText x={WIDTH - MARGIN - 4} y={near.y + near.height + PANEL_GAP / 2 + 4} fontSize={12} fontFamily={fonts.semibold} fill={colors.copper} textAnchor="end">
-              {label}
-            </SvgText>
-          </G>
+          <SvgText x={WIDTH - MARGIN - 4} y={mid - 6} fontSize={12} fontFamily={fonts.semibold} fill={colors.copper} textAnchor="end">
+            {label}
+          </SvgText>
         ) : null}
       </Svg>
     </View>
