@@ -54,9 +54,17 @@ export function CableMarks({ designId, version, cableId, label, queue = buildQue
   const queued = items.filter((i): i is QueuedMark => i.kind === 'mark' && i.designId === designId && i.version === version && i.fields.cableId === cableId && i.userId === me?.id);
   const marks = (history.data ?? []).filter((m): m is CableHistoryEntry => m.kind === 'cable' && m.cableId === cableId);
   const status = shown ? ownValue(shown.cables, cableId) : undefined;
+  // Hooks above, answers below: nothing is drawn from a record that has not arrived.
   const photos = shown ? (ownValue(shown.photos.cables, cableId) ?? []) : [];
 
-  if (shown && !status) {
+  if (!shown) {
+    return (
+      <View style={styles.wrap} testID="cable-marks">
+        <QueryStatus query={query} what="The build record" />
+      </View>
+    );
+  }
+  if (!status) {
     return (
       <Banner tone="error" title="Not in this version" testID="cable-marks-missing">
         {`This version has no cable ${name}.`}
@@ -101,7 +109,6 @@ export function CableMarks({ designId, version, cableId, label, queue = buildQue
 
   return (
     <View style={styles.wrap} testID="cable-marks">
-      <QueryStatus query={query} what="The build record" />
       <View style={styles.current}>
         <Text variant="smallStrong">Now</Text>
         <Badge label={STATE_LABELS[state]} tone={STATE_TONES[state]} testID="cable-marks-state" />
