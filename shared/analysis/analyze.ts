@@ -1,5 +1,6 @@
 import { byId, createContext } from '@/shared/analysis/context';
-import { analyzeResilience } from '@/shared/analysis/resilience';
+import { afterOneFailure } from '@/shared/analysis/after-one';
+import { analyzeResilience, ResilienceEngine } from '@/shared/analysis/resilience';
 import { RULE_GROUPS } from '@/shared/analysis/rules';
 import { redundancyFindings } from '@/shared/analysis/rules/redundancy';
 import type { AnalyzeOptions, Finding, Report, Severity } from '@/shared/analysis/types';
@@ -34,10 +35,13 @@ function compareFindings(x: Finding, y: Finding): number {
 
 export function analyze(doc: Topology, options: AnalyzeOptions = {}): Report {
   const ctx = createContext(doc, options.failed);
-  const { hosts, failures } = analyzeResilience(ctx);
+  const engine = new ResilienceEngine(ctx);
+  const resilience = analyzeResilience(ctx, engine);
+  const { hosts, failures } = resilience;
   const findings = redundancyFindings(ctx, hosts).slice();
   // Appended one by one: spreading a long list into push() overflows the call stack.
   for (const group of RULE_GROUPS) for (const finding of group(ctx)) findings.push(finding);
   findings.sort(compareFindings);
-  return { hosts, failures, findings };
+  if (!options.afterOne) return { hosts, failures, findings };
+  return { hosts, failures, findings, afterOneFailure: afterOneFailure(ctx, resilience, engine) };
 }

@@ -1,5 +1,6 @@
 import { hostAttachments, type Attachment } from '@/shared/analysis/attachments';
-import { byId, type AnalysisContext } from '@/shared/analysis/context';
+import { byId, unitKindOf, type AnalysisContext } from '@/shared/analysis/context';
+import { powerCuts } from '@/shared/analysis/power';
 import { ANY_NETWORK, compileGraph, type CompiledGraph } from '@/shared/analysis/compile';
 import { DominatorTree } from '@/shared/analysis/dominator-tree';
 import { DominatorSolver } from '@/shared/analysis/dominators';
@@ -25,12 +26,12 @@ import type { ArrayDevice } from '@/shared/topology/schema';
 const UNUSED_NETWORK = -2;
 
 /** The networks to run for one array: those its controller ports use, or all of them if a port has none. */
-function networksOf(ctx: AnalysisContext, array: ArrayDevice): (string | null)[] {
+function networksOf(ctx: AnalysisContext, array: ArrayDevice, down?: ReadonlySet<string>): (string | null)[] {
   if (!ctx.hasNetworks) return [null];
   const ids = new Set<string>();
   let unrestricted = false;
   for (const controller of array.controllers) {
-    if (ctx.failed.has(controller.id)) continue;
+    if (ctx.failed.has(controller.id) || down?.has(controller.id)) continue;
     for (const port of controller.ports) {
       if (port.role !== 'data') continue;
       if (port.networkId === undefined) unrestricted = true;
@@ -73,15 +74,22 @@ function groupByHost(graph: CompiledGraph, attachments: Attachment[]): HostGroup
 
 /**
  * Per host (by group index): the units whose loss alone cuts it off the array on every network
- * where it reaches it, or undefined when it reaches the array on none.
+ * where it reaches it, or undefined when it reaches the array on none. `down` (optional) holds units
+ * failed in addition to the graph's own, as node flags and as ids (for the cards).
  */
-function hostDominators(ctx: AnalysisContext, graph: CompiledGraph, groups: HostGroups, array: ArrayDevice): (string[] | undefined)[] {
-  const solver = new DominatorSolver(graph);
+function hostDominators(
+  ctx: AnalysisContext,
+  solver: DominatorSolver,
+  graph: CompiledGraph,
+  groups: HostGroups,
+  array: ArrayDevice,
+  down?: { nodes: Uint8Array; ids: ReadonlySet<string> },
+): (string[] | undefined)[] {
   const root = graph.indexOf.get(array.id)!;
   const result: (string[] | undefined)[] = new Array(groups.hosts.length);
-  for (const key of networksOf(ctx, array)) {
+  for (const key of networksOf(ctx, array, down?.ids)) {
     const code = key === null ? ANY_NETWORK : graph.networkCode.get(key) ?? UNUSED_NETWORK;
-    const tree = new DominatorTree(graph, solver.run(root, code));
+    const tree = new DominatorTree(graph, solver.run(root, code, down?.nodes));
     const numberOf = tree.run.numberOf;
     for (let h = 0; h < groups.hosts.length; h += 1) {
       const sofar = result[h];
@@ -95,6 +103,7 @@ function hostDominators(ctx: AnalysisContext, graph: CompiledGraph, groups: Host
         const upstream = groups.upstream[i];
         if (upstream < 0 || numberOf[upstream] < 0) continue;
         if (!passes(att.hostNetwork, key) || !passes(att.controllerNetwork, key)) continue;
+        if (down && down.ids.has(att.adapter)) continue;
         meet = count === 0 ? numberOf[upstream] : tree.lowestCommonAncestor(meet, numberOf[upstream]);
         card = count === 0 || card === att.adapter ? att.adapter : null;
         cable = att.cable;
@@ -114,15 +123,48 @@ function hostDominators(ctx: AnalysisContext, graph: CompiledGraph, groups: Host
 
 export type Resilience = { hosts: HostArrayResult[]; failures: FailureResult[] };
 
+/**
+ * The parts of the analysis that do not change when more units fail: the core graph, the host
+ * attachments, the session table and the arrays, built once from the context. `dataSpofs` answers
+ * the data-path single points of failure with further units down, by leaving their nodes out of the
+ * dominator runs, so "what if this fails as well" costs the runs and not a new graph.
+ */
+export class ResilienceEngine {
+  readonly graph: CompiledGraph;
+  readonly groups: HostGroups;
+  readonly sessions: SessionTable;
+  readonly arrays: ArrayDevice[];
+  private readonly solver: DominatorSolver;
+
+  constructor(readonly ctx: AnalysisContext) {
+    this.graph = compileGraph(buildDataPathGraph(ctx));
+    this.groups = groupByHost(this.graph, hostAttachments(ctx));
+    this.sessions = countSessions(ctx);
+    this.arrays = ctx.doc.devices.filter((d): d is ArrayDevice => d.kind === 'array').sort((x, y) => byId(x.id, y.id));
+    this.solver = new DominatorSolver(this.graph);
+  }
+
+  /** Per array (id order), per host group: its data-path single points of failure, undefined when cut off. */
+  dataSpofs(down?: ReadonlySet<string>): (string[] | undefined)[][] {
+    let mask: { nodes: Uint8Array; ids: ReadonlySet<string> } | undefined;
+    if (down) {
+      const nodes = new Uint8Array(this.graph.ids.length);
+      for (const id of down) {
+        const n = this.graph.indexOf.get(id);
+        if (n !== undefined) nodes[n] = 1;
+      }
+      mask = { nodes, ids: down };
+    }
+    return this.arrays.map((array) => hostDominators(this.ctx, this.solver, this.graph, this.groups, array, mask));
+  }
+}
+
 function unitKind(ctx: AnalysisContext, id: string): UnitKind {
-  if (ctx.index.cables.has(id)) return 'cable';
-  if (ctx.index.adapters.has(id)) return 'adapter';
-  if (ctx.index.controllers.has(id)) return 'controller';
-  return 'switch';
+  return unitKindOf(ctx, id) ?? 'switch';
 }
 
 /** Indices of the ids in plain code-unit order. */
-function sortedOrder(ids: string[]): number[] {
+export function sortedOrder(ids: string[]): number[] {
   return ids.map((_, i) => i).sort((x, y) => byId(ids[x], ids[y]));
 }
 
@@ -141,18 +183,89 @@ function pairResult(host: string, array: string, spof: string[], sessions: Sessi
   };
 }
 
-export function analyzeResilience(ctx: AnalysisContext): Resilience {
-  const graph = compileGraph(buildDataPathGraph(ctx));
-  const groups = groupByHost(graph, hostAttachments(ctx));
-  const sessions = countSessions(ctx);
-  const arrays = ctx.doc.devices.filter((d): d is ArrayDevice => d.kind === 'array').sort((x, y) => byId(x.id, y.id));
-  const perArray = arrays.map((array) => hostDominators(ctx, graph, groups, array));
+/**
+ * The power units that alone cut each live pair off, with `failed` down (power.ts): a PSU or feed
+ * that takes down the host or the array, or the switches whose loss together cuts the pair. One
+ * switch is read off the data-path answer; several are searched again with all of them down.
+ * `spofs[a][h]` is the data-path answer with `failed` down, `live(a, h)` whether the pair is up.
+ * Answers, per pair index a·H + h, the power units found, in the order of powerCuts.
+ */
+export function powerSpofs(
+  engine: ResilienceEngine,
+  failed: ReadonlySet<string>,
+  spofs: (string[] | undefined)[][],
+  live: (a: number, h: number) => boolean,
+): Map<number, string[]> {
+  const out = new Map<number, string[]>();
+  const cuts = powerCuts(engine.ctx.power, failed);
+  if (cuts.length === 0) return out;
+  const { hosts } = engine.groups;
+  const H = hosts.length;
+  const hostIndex = new Map<string, number>();
+  hosts.forEach((host, h) => hostIndex.set(host, h));
+  const arrayIndex = new Map<string, number>();
+  engine.arrays.forEach((array, a) => arrayIndex.set(array.id, a));
+  // The pairs each lone switch of a cut is a data-path single point of failure of.
+  const lone = new Map<string, number[]>();
+  for (const cut of cuts) {
+    const switches = cut.devices.filter((d) => d.kind === 'switch');
+    if (switches.length === 1) lone.set(switches[0].id, []);
+  }
+  if (lone.size > 0) {
+    for (let a = 0; a < spofs.length; a += 1) {
+      for (let h = 0; h < H; h += 1) {
+        const list = spofs[a][h];
+        if (!list || !live(a, h)) continue;
+        for (const unit of list) lone.get(unit)?.push(a * H + h);
+      }
+    }
+  }
+  const stamp = new Int32Array(engine.arrays.length * H).fill(-1);
+  cuts.forEach((cut, c) => {
+    const add = (pair: number) => {
+      if (stamp[pair] === c) return;
+      stamp[pair] = c;
+      const list = out.get(pair);
+      if (list) list.push(cut.unit);
+      else out.set(pair, [cut.unit]);
+    };
+    const switches: string[] = [];
+    for (const device of cut.devices) {
+      if (device.kind === 'host') {
+        const h = hostIndex.get(device.id);
+        if (h !== undefined) for (let a = 0; a < engine.arrays.length; a += 1) if (live(a, h)) add(a * H + h);
+      } else if (device.kind === 'array') {
+        const a = arrayIndex.get(device.id)!;
+        for (let h = 0; h < H; h += 1) if (live(a, h)) add(a * H + h);
+      } else {
+        switches.push(device.id);
+      }
+    }
+    if (switches.length === 1) {
+      for (const pair of lone.get(switches[0]) ?? []) add(pair);
+    } else if (switches.length > 1) {
+      const down = new Set(failed);
+      for (const id of switches) down.add(id);
+      const after = engine.dataSpofs(down);
+      for (let a = 0; a < after.length; a += 1) for (let h = 0; h < H; h += 1) if (live(a, h) && !after[a][h]) add(a * H + h);
+    }
+  });
+  return out;
+}
+
+export function analyzeResilience(ctx: AnalysisContext, engine: ResilienceEngine = new ResilienceEngine(ctx)): Resilience {
+  const { groups, sessions, arrays } = engine;
+  const perArray = engine.dataSpofs();
+  const H = groups.hosts.length;
+  const power = powerSpofs(engine, ctx.failed, perArray, (a, h) => perArray[a][h] !== undefined && (sessions.get(groups.hosts[h])?.get(arrays[a].id)?.sessions ?? 0) > 0);
   // Hosts, then arrays, in id order: hosts[] and every cutsOff list come out sorted as they are built.
   const hosts: HostArrayResult[] = [];
   const cuts = new Map<string, HostArrayPair[]>();
   for (const h of sortedOrder(groups.hosts)) {
     for (let a = 0; a < arrays.length; a += 1) {
-      const spof = perArray[a][h];
+      const data = perArray[a][h];
+      const extra = data && power.get(a * H + h);
+      const spof = extra ? [...data, ...extra] : data;
       const result = spof && pairResult(groups.hosts[h], arrays[a].id, spof, sessions);
       if (!result) continue;
       hosts.push(result);
