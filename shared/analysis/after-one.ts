@@ -1,6 +1,6 @@
 import { byId, type AnalysisContext } from '@/shared/analysis/context';
-import { withPowerFailures } from '@/shared/analysis/power';
-import { powerSpofs, sortedOrder, ResilienceEngine, type Resilience } from '@/shared/analysis/resilience';
+import { powerCuts, powerCutsAfter, withPowerFailures } from '@/shared/analysis/power';
+import { powerSpofs, ResilienceEngine, type Resilience } from '@/shared/analysis/resilience';
 import type { AfterOneResult, ExposedPair, HostArrayPair } from '@/shared/analysis/types';
 
 /**
@@ -30,39 +30,33 @@ export function afterOneUnits(ctx: AnalysisContext): string[] {
 }
 
 export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine: ResilienceEngine = new ResilienceEngine(ctx)): AfterOneResult[] {
-  const { groups, arrays } = engine;
+  const { groups, arrays, hostIndex, arrayIndex } = engine;
   const H = groups.hosts.length;
-  const hostIndex = new Map<string, number>();
-  groups.hosts.forEach((host, h) => hostIndex.set(host, h));
-  const arrayIndex = new Map<string, number>();
-  arrays.forEach((array, a) => arrayIndex.set(array.id, a));
-  // The report's pairs, by pair index a·H + h, in the report's order (host, then array).
-  const pairs = base.hosts.map((pair) => ({ pair, index: arrayIndex.get(pair.array)! * H + hostIndex.get(pair.host)! }));
+  const A = arrays.length;
+  // The report's pairs by pair index a·H + h, listed host by host, then array by array, as in hosts[].
+  const pairs = Int32Array.from(base.hosts, (pair) => arrayIndex.get(pair.array)! * H + hostIndex.get(pair.host)!);
   const cutsOff = new Map<string, HostArrayPair[]>();
   for (const failure of base.failures) cutsOff.set(failure.unit, failure.cutsOff);
-  const order = sortedOrder(groups.hosts);
+  const cutsBefore = powerCuts(ctx.power, ctx.failed);
   const out: AfterOneResult[] = [];
+  const alive = new Uint8Array(A * H);
   for (const unit of afterOneUnits(ctx)) {
     const down = withPowerFailures(ctx.power, [...ctx.requested, unit]);
     for (const id of ctx.failed) down.add(id);
     const spofs = engine.dataSpofs(down);
     const cutOff = cutsOff.get(unit) ?? [];
-    const gone = new Set<number>();
-    for (const pair of cutOff) gone.add(arrayIndex.get(pair.array)! * H + hostIndex.get(pair.host)!);
-    const alive = new Uint8Array(arrays.length * H);
-    for (const { index } of pairs) if (!gone.has(index) && spofs[Math.floor(index / H)][index % H]) alive[index] = 1;
-    const power = powerSpofs(engine, down, spofs, (a, h) => alive[a * H + h] === 1);
+    alive.fill(0);
+    for (const index of pairs) if (spofs[Math.floor(index / H)][index % H]) alive[index] = 1;
+    for (const pair of cutOff) alive[arrayIndex.get(pair.array)! * H + hostIndex.get(pair.host)!] = 0;
+    const power = powerSpofs(engine, down, spofs, alive, powerCutsAfter(ctx.power, cutsBefore, down, unit));
     const exposed: ExposedPair[] = [];
-    for (const h of order) {
-      for (let a = 0; a < arrays.length; a += 1) {
-        const index = a * H + h;
-        if (!alive[index]) continue;
-        const data = spofs[a][h]!;
-        const extra = power.get(index);
-        if (data.length === 0 && !extra) continue;
-        const singlePointsOfFailure = (extra ? [...data, ...extra] : data.slice()).sort(byId);
-        exposed.push({ host: groups.hosts[h], array: arrays[a].id, singlePointsOfFailure });
-      }
+    for (const index of pairs) {
+      if (!alive[index]) continue;
+      const data = spofs[Math.floor(index / H)][index % H]!;
+      const extra = power.get(index);
+      if (data.length === 0 && !extra) continue;
+      const singlePointsOfFailure = (extra ? [...data, ...extra] : data.slice()).sort(byId);
+      exposed.push({ host: groups.hosts[index % H], array: arrays[Math.floor(index / H)].id, singlePointsOfFailure });
     }
     out.push({ failed: unit, exposed, cutOff });
   }

@@ -46,6 +46,14 @@ export class DominatorSolver {
     return { nodes, idom, numberOf: this.numberOf, count: nodes.length };
   }
 
+  /** Only which nodes the run reaches: node index → preorder number, -1 when unreachable. */
+  reach(root: number, network: number, down?: Uint8Array): Int32Array {
+    for (const node of this.visited) this.numberOf[node] = -1;
+    this.visited.length = 0;
+    this.search(root, network, down);
+    return this.numberOf;
+  }
+
   /** Iterative DFS: preorder numbers, DFS-tree parents and predecessor lists (by preorder number). */
   private search(root: number, network: number, down: Uint8Array | undefined) {
     const { offsets, targets } = this.graph;

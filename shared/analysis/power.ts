@@ -111,3 +111,33 @@ export function powerCuts(model: PowerModel, failed: ReadonlySet<string>): Power
   }
   return out;
 }
+
+/**
+ * powerCuts with one more unit failed, from the cuts before it: a unit that is not power leaves them
+ * as they are, a PSU changes only its own device's, and a feed is worked out again.
+ */
+export function powerCutsAfter(model: PowerModel, before: PowerCut[], failed: ReadonlySet<string>, unit: string): PowerCut[] {
+  if (model.feeds.has(unit)) return powerCuts(model, failed);
+  const owner = model.psus.get(unit)?.device;
+  if (!owner) return before;
+  const out: PowerCut[] = [];
+  for (const cut of before) {
+    if (!cut.devices.includes(owner)) {
+      out.push(cut);
+      continue;
+    }
+    const devices = cut.devices.filter((d) => d !== owner);
+    if (devices.length > 0) out.push({ unit: cut.unit, devices });
+  }
+  const live = (owner.psus ?? []).filter((psu) => psuLive(psu, failed));
+  if (live.length === 0) return out;
+  const feedId = live[0].feedId;
+  if (feedId !== undefined && live.every((psu) => psu.feedId === feedId)) {
+    // The cuts before are shared by every unit's answer: a changed one is a new object.
+    const at = out.findIndex((c) => c.unit === feedId);
+    if (at >= 0) out[at] = { unit: feedId, devices: [...out[at].devices, owner] };
+    else out.push({ unit: feedId, devices: [owner] });
+  }
+  if (live.length === 1) out.push({ unit: live[0].id, devices: [owner] });
+  return out;
+}
