@@ -29,7 +29,10 @@ export function afterOneUnits(ctx: AnalysisContext): string[] {
   return units.filter((id) => !ctx.failed.has(id)).sort(byId);
 }
 
-export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine: ResilienceEngine = new ResilienceEngine(ctx)): AfterOneResult[] {
+export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine?: ResilienceEngine): AfterOneResult[];
+export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine: ResilienceEngine, deadline: number): AfterOneResult[] | null;
+/** `deadline` (a Date.now() time): give up and answer null once it has passed. */
+export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine: ResilienceEngine = new ResilienceEngine(ctx), deadline?: number): AfterOneResult[] | null {
   const { groups, arrays, hostIndex, arrayIndex } = engine;
   const H = groups.hosts.length;
   const A = arrays.length;
@@ -41,6 +44,7 @@ export function afterOneFailure(ctx: AnalysisContext, base: Resilience, engine: 
   const out: AfterOneResult[] = [];
   const alive = new Uint8Array(A * H);
   for (const unit of afterOneUnits(ctx)) {
+    if (deadline !== undefined && Date.now() > deadline) return null;
     const down = withPowerFailures(ctx.power, [...ctx.requested, unit]);
     for (const id of ctx.failed) down.add(id);
     const spofs = engine.dataSpofs(down);
