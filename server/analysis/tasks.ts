@@ -1,5 +1,6 @@
 import type { Issue } from '@/shared/api/common';
 import { analyze } from '@/shared/analysis/analyze';
+import { diffTopologies } from '@/shared/diff';
 import { summarize, type ReportSummary } from '@/shared/analysis/summary';
 import { assignStableLabels, labelHistoryFromData, NO_LABEL_HISTORY, type LabelHistoryData } from '@/shared/labels';
 import { validateTopology } from '@/shared/topology/validate';
@@ -51,8 +52,33 @@ export function report(documentJson: string): TaskOutcome<{ summary: ReportSumma
   }
 }
 
+/**
+ * A stored document as format 2 JSON text: a format 1 version is upgraded on every read (it is never
+ * rewritten), which means validating it, so it is done here rather than on the request thread.
+ */
+export function storedDocument(documentJson: string): TaskOutcome<string> {
+  const checked = validateTopology(JSON.parse(documentJson) as unknown);
+  if (!checked.ok) return { ok: false, refused: checked.issues };
+  return { ok: true, value: JSON.stringify(checked.doc) };
+}
+
+/** What changed going from the stored document `before` to `after` (both JSON text), as JSON text. */
+export function diff(input: { before: string; after: string }): TaskOutcome<string> {
+  const before = validateTopology(JSON.parse(input.before) as unknown);
+  if (!before.ok) return { ok: false, refused: before.issues };
+  const after = validateTopology(JSON.parse(input.after) as unknown);
+  if (!after.ok) return { ok: false, refused: after.issues };
+  try {
+    return { ok: true, value: JSON.stringify(diffTopologies(before.doc, after.doc)) };
+  } catch (error) {
+    return { ok: false, failed: error instanceof Error ? error.message : String(error) };
+  }
+}
+
 /** Every task by name; the child process looks tasks up here (a Map: names come over a channel). */
 export const TASKS = new Map<string, (input: never) => unknown>([
   ['prepare', prepare],
   ['report', report],
+  ['storedDocument', storedDocument],
+  ['diff', diff],
 ]);

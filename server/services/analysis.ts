@@ -23,6 +23,10 @@ export type Analysis = {
   /** The same for a document that is already JSON text (a stored version being restored). */
   prepareJson(documentJson: string, labels?: LabelHistory): Promise<Result<PreparedText>>;
   report(documentJson: string): Promise<Result<StoredReport>>;
+  /** A stored document as format 2 JSON text (a format 1 version upgraded). */
+  storedDocument(documentJson: string): Promise<Result<string>>;
+  /** The diff of two stored documents, as JSON text. */
+  diff(before: string, after: string): Promise<Result<string>>;
 };
 
 const TASKS_MODULE = path.join(__dirname, '..', 'analysis', 'tasks.ts');
@@ -41,6 +45,8 @@ export function poolAnalysis(limits: Config['analysis']): Analysis {
     prepare: (document, labels) => runTask(pool, limits, 'prepare', prepareInput(JSON.stringify(document), labels), 'it was not saved'),
     prepareJson: (documentJson, labels) => runTask(pool, limits, 'prepare', prepareInput(documentJson, labels), 'it was not saved'),
     report: (documentJson) => runTask(pool, limits, 'report', documentJson, 'its report cannot be shown'),
+    storedDocument: (documentJson) => runTask(pool, limits, 'storedDocument', documentJson, 'it cannot be shown'),
+    diff: (before, after) => runTask(pool, limits, 'diff', { before, after }, 'the comparison cannot be shown'),
   };
 }
 
@@ -53,6 +59,8 @@ export function inProcessAnalysis(): Analysis {
     prepare: async (document, labels) => outcome(tasks.prepare(prepareInput(JSON.stringify(document), labels)), 'it was not saved'),
     prepareJson: async (documentJson, labels) => outcome(tasks.prepare(prepareInput(documentJson, labels)), 'it was not saved'),
     report: async (documentJson) => outcome(tasks.report(documentJson), 'its report cannot be shown'),
+    storedDocument: async (documentJson) => outcome(tasks.storedDocument(documentJson), 'it cannot be shown'),
+    diff: async (before, after) => outcome(tasks.diff({ before, after }), 'the comparison cannot be shown'),
   };
 }
 
