@@ -5,6 +5,7 @@ import type { Config } from './config';
 import { securityHeaders } from './http/security';
 import { sessionMiddleware } from './http/session-middleware';
 import { devWebProxy } from './http/dev-proxy';
+import { saveBodiesAsText } from './http/document-body';
 import { webApp } from './http/web-app';
 import type { Mailer } from './mail/mailer';
 import { loadSessionUser } from './middleware/auth';
@@ -38,6 +39,7 @@ export function createApp({ sequelize, mailer, config, clock = Date.now }: AppDe
   app.use(refuseCrossSite(config.trustedOrigins));
 
   const api = express.Router();
+  api.use(saveBodiesAsText());
   api.use(express.json({ limit: BODY_LIMIT_BYTES }));
   api.use(sessionMiddleware(sequelize, config));
   api.use(loadSessionUser(services.auth));

@@ -1,8 +1,10 @@
-import type { Issue } from '@/shared/api/common';
+import { toIssues, type Issue } from '@/shared/api/common';
+import { saveVersionBody } from '@/shared/api/designs';
 import { analyze } from '@/shared/analysis/analyze';
 import { diffTopologies } from '@/shared/diff';
 import { summarize, type ReportSummary } from '@/shared/analysis/summary';
 import { assignStableLabels, labelHistoryFromData, NO_LABEL_HISTORY, type LabelHistoryData } from '@/shared/labels';
+import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import { contentHash } from '@/server/services/designs/canonical';
 
@@ -31,7 +33,54 @@ export type PrepareInput = { documentJson: string; labels?: LabelHistoryData };
 export function prepare(input: PrepareInput): TaskOutcome<PreparedText> {
   const checked = validateTopology(JSON.parse(input.documentJson) as unknown);
   if (!checked.ok) return { ok: false, refused: checked.issues };
-  const doc = assignStableLabels(checked.doc, input.labels ? labelHistoryFromData(input.labels) : NO_LABEL_HISTORY);
+  return analysed(checked.doc, input.labels);
+}
+
+/** A save's body as it came over the wire (JSON text), and the design's label history. */
+export type SaveInput = { bodyText: string; labels?: LabelHistoryData };
+/** A save's fields other than the document, as the body schema reads them. */
+export type SaveFields = { baseVersion: number | null; message: string };
+/**
+ * `malformed`: the body is not JSON (the sentence body-parser's error would have given);
+ * `bodyIssues`: the body's own fields are wrong (paths in the body, as the validate middleware gives them).
+ */
+export type SaveOutcome =
+  | { ok: true; value: { fields: SaveFields; prepared: PreparedText } }
+  | { ok: false; malformed: string }
+  | { ok: false; bodyIssues: Issue[] }
+  | { ok: false; refused: Issue[] }
+  | { ok: false; failed: string };
+
+export const NOT_JSON = 'The request body is not valid JSON.';
+
+/**
+ * The whole save in one task: the body is parsed here, once, and never on the request thread (a
+ * 20,000-host document is megabytes of JSON); its fields are checked with the same schema the
+ * route's validator would use, then the document is validated and analysed as `prepare` does.
+ * As with express.json's strict mode, a body must be a JSON object or array.
+ */
+export function prepareSave(input: SaveInput): SaveOutcome {
+  let body: unknown;
+  if (input.bodyText !== '') {
+    const first = /\S/.exec(input.bodyText)?.[0];
+    if (first !== '{' && first !== '[') return { ok: false, malformed: NOT_JSON };
+    try {
+      body = JSON.parse(input.bodyText) as unknown;
+    } catch {
+      return { ok: false, malformed: NOT_JSON };
+    }
+  }
+  const fields = saveVersionBody.safeParse(body);
+  if (!fields.success) return { ok: false, bodyIssues: toIssues(fields.error) };
+  const checked = validateTopology(fields.data.document);
+  if (!checked.ok) return { ok: false, refused: checked.issues };
+  const prepared = analysed(checked.doc, input.labels);
+  if (!prepared.ok) return prepared;
+  return { ok: true, value: { fields: { baseVersion: fields.data.baseVersion, message: fields.data.message }, prepared: prepared.value } };
+}
+
+function analysed(checked: Topology, labels: LabelHistoryData | undefined): TaskOutcome<PreparedText> {
+  const doc = assignStableLabels(checked, labels ? labelHistoryFromData(labels) : NO_LABEL_HISTORY);
   try {
     const report = analyze(doc);
     return { ok: true, value: { json: JSON.stringify(doc), hash: contentHash(doc), summary: summarize(report, doc), reportJson: JSON.stringify(report) } };
@@ -78,6 +127,7 @@ export function diff(input: { before: string; after: string }): TaskOutcome<stri
 /** Every task by name; the child process looks tasks up here (a Map: names come over a channel). */
 export const TASKS = new Map<string, (input: never) => unknown>([
   ['prepare', prepare],
+  ['prepareSave', prepareSave],
   ['report', report],
   ['storedDocument', storedDocument],
   ['diff', diff],

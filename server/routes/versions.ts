@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { designIdParams, diffQuery, restoreBody, reviewBody, saveVersionBody, versionParams } from '@/shared/api/designs';
+import { designIdParams, diffQuery, restoreBody, reviewBody, versionParams } from '@/shared/api/designs';
 import { answeredNotModified } from '@/server/http/cache';
 import { reply, replyJsonText, replyRawJson } from '@/server/http/reply';
 import { currentUser, requireAnyCapability, requireCapability } from '@/server/middleware/auth';
@@ -15,15 +15,18 @@ export function versionRoutes({ versions, reviews }: Services): Router {
   const router = Router();
   const read = requireCapability('readApprovedVersions');
   const edit = requireCapability('editDesigns');
-  const saving = validate({ body: saveVersionBody, params: designIdParams });
+  const saving = validate({ params: designIdParams });
   const one = validate({ params: versionParams });
   const diffing = validate({ params: versionParams, query: diffQuery });
   const restoring = validate({ body: restoreBody, params: versionParams });
   const reviewing = validate({ body: reviewBody, params: versionParams });
 
+  // The body arrives as text (server/http/document-body.ts) and is parsed and checked against
+  // saveVersionBody in the analysis process, with the document: the request thread never parses it.
   router.post('/:id/versions', edit, saving, async (req, res) => {
-    const { body, params } = saving.input(req);
-    reply(res, await versions.save(currentUser(req), params.id, body), 201, (version) => ({ version }));
+    const { params } = saving.input(req);
+    const bodyText = typeof req.body === 'string' ? req.body : '';
+    reply(res, await versions.saveBody(currentUser(req), params.id, bodyText), 201, (version) => ({ version }));
   });
 
   router.get('/:id/versions/:n', read, one, async (req, res) => {

@@ -195,6 +195,21 @@ export function createVersionService(deps: DesignDeps) {
     },
 
     /**
+     * The same from the request body as it came over the wire (JSON text): the body is parsed, its
+     * fields checked and its document validated and analysed in one analysis task, so the request
+     * thread never parses or walks a large document. A design the viewer cannot see is 404 before
+     * anything is analysed.
+     */
+    async saveBody(viewer: User, id: number, bodyText: string): Promise<Result<VersionSummary>> {
+      const own = await models.Design.findOne({ where: { id, teamId: viewer.teamId }, attributes: ['id'] });
+      if (!own) return fail('not-found', NO_SUCH_DESIGN);
+      const prepared = await analysis.prepareSave(bodyText, await loadLabelHistory(models, id));
+      if (!prepared.ok) return prepared;
+      const { fields } = prepared.value;
+      return write(viewer, id, { message: fields.message, prepared: prepared.value.prepared, baseVersion: fields.baseVersion }, {});
+    },
+
+    /**
      * Make version `n`'s document the newest version again, on top of whatever is latest now (no base
      * check: restoring does not build on what the client had open). The analysis is run afresh, in the
      * analysis pool, so the new version's report is today's analysis of that document.
