@@ -18,10 +18,10 @@ const get = api.get as jest.Mock;
 function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
   const report = analyze(doc);
   get.mockImplementation(async (path: string) => {
-    if (path === `/api/designs/1/versions/${n}`) return { version: versionDetail({ number: n, doc }) };
-    if (path === `/api/designs/1/versions/${n}/report`) return { report, summary: summarize(report, doc) };
+    if (path === `/api/designs/1/versions/${n}/report-page`) {
+      return { design: designResponse([versionSummary({ number: n, doc })]).design, version: versionDetail({ number: n, doc }), report, summary: summarize(report, doc) };
+    }
     if (path === `/api/designs/1/versions/${n}/login-plan`) return loginPlan(doc);
-    if (path === '/api/designs/1') return designResponse([versionSummary({ number: n, doc })]);
     throw new Error(`unexpected request ${path}`);
   });
   return { doc, report };
@@ -58,6 +58,8 @@ describe('failure report', () => {
     // product.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
     expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
     expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
+    // The screen's data comes in one request, not one each for the design, the version and the report.
+    expect(get.mock.calls.map((c) => c[0])).toEqual(['/api/designs/1/versions/1/report-page']);
   });
 
   it("names cam-rec-2's single points of failure by device and port in version 1", async () => {
