@@ -1,8 +1,7 @@
 import { analyze } from '@/shared/analysis/analyze';
 import { reachOf } from '@/shared/rules/cables';
-import { REACH } from '@/shared/rules/limits';
+import { REACH, LIMITS } from '@/shared/rules/limits';
 import { checkIscsiName } from '@/shared/rules/iqn';
-import { LIMITS } from '@/shared/rules/limits';
 import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import { twoFabrics } from './helpers/topologies';
