@@ -14,7 +14,7 @@ export const UNIT_KIND_LABELS: Record<UnitKind, string> = {
 };
 
 /**
- * Every failure unit of the document (resilience-analysis.md: each cable, card, switch and
+ * Every failure unit of the document (docs/analysis.md: each cable, card, switch and
  * controller), the big ones first: switches, controllers, cards, then cables, in document order.
  */
 export function failureUnits(doc: Topology, index: TopologyIndex = indexTopology(doc)): FailureUnit[] {

@@ -11,7 +11,7 @@ export type AnalysisContext = {
   doc: Topology;
   index: TopologyIndex;
   failed: ReadonlySet<string>;
-  /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
+  /** With no networks at all, every data port pairs with every other (docs/analysis.md). */
   hasNetworks: boolean;
   /** The cables that can carry a data path, in document order; filled on first use (see dataCables). */
   cache: { dataCables?: readonly DataCableEnds[]; ips?: Map<string, Ip | null> };

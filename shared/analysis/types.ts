@@ -1,4 +1,4 @@
-/** The analysis report (resilience-analysis.md): the same shape in the browser and on the server. */
+/** The analysis report (docs/analysis.md): the same shape in the browser and on the server. */
 export type Severity = 'error' | 'warning' | 'info';
 
 export type UnitKind = 'cable' | 'adapter' | 'switch' | 'controller';

@@ -53,7 +53,7 @@ describe('cable reach against the published values', () => {
       ([, entry]) => !/(RFC \d+|IEEE 802|SFF-\d+|EIA-|TIA|common practice)/.test(entry.source),
     );
     expect(unsourced).toEqual([]);
-    // Clause numbers recalled rather than read are marked as such (check-values.md).
+    // Clause numbers recalled rather than read are marked as such (docs/trade-values.md).
     expect(reachOf('cat5e', 1)!.source).toContain('from memory');
   });
 
