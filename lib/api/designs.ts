@@ -21,7 +21,7 @@ export const designKeys = {
 /** Lists and review states change when teammates act, so they are looked at again after half a minute. */
 export const DESIGNS_STALE_MS = 30_000;
 /**
- * A version's document never changes once saved (api.md): documents, reports and diffs stay cached.
+ * A version's document never changes once saved (docs/api.md): documents, reports and diffs stay cached.
  * Its review thread does change; screens read that from the design query, which goes stale.
  */
 export const VERSION_STALE_MS = Infinity;

@@ -55,7 +55,7 @@ export function versionRoutes({ versions, reviews }: Services): Router {
     replyRawJson(res, await versions.reportPage(opened.value, viewer), 200);
   });
 
-  // For every unit not owned by one host: the pairs it cuts off and those it leaves exposed (api.md `--after-one`).
+  // For every unit not owned by one host: the pairs it cuts off and those it leaves exposed (docs/api.md `--after-one`).
   router.get('/:id/versions/:n/after-one', read, one, async (req, res) => {
     const { id, n } = one.input(req).params;
     replyJsonText(res, await versions.afterOne(currentUser(req), id, n), 200, (stored) => ({ afterOneFailure: stored.afterOneJson }));

@@ -23,7 +23,7 @@ export type Analysis = {
   /** The same for a document that is already JSON text (a stored version being restored). */
   prepareJson(documentJson: string, labels?: LabelHistory): Promise<Result<PreparedText>>;
   report(documentJson: string): Promise<Result<StoredReport>>;
-  /** afterOneFailure (api.md `--after-one`) of a stored document, as JSON text. */
+  /** afterOneFailure (docs/api.md `--after-one`) of a stored document, as JSON text. */
   afterOne(documentJson: string): Promise<Result<{ afterOneJson: string }>>;
   /**
    * A save's whole body as the JSON text that came over the wire: parsed, its fields checked, its

@@ -6,7 +6,7 @@ import type { Topology } from '../topology/schema';
 import { cleanText } from '../text/clean';
 
 /**
- * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
+ * Bodies, params and answers of the designs and versions routes (docs/api.md). The document itself is
  * checked by `validateTopology` (shared/topology/validate.ts), which reports every problem with its
  * path; here it is only required to be present, so that its issues come out with `document.` paths.
  */
