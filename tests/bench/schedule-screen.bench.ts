@@ -3,8 +3,8 @@
  * rows in chromium, on a phone (390×844, cards) and on a wide screen (1440×900, the table). The page
  * is the real web app on a throwaway server; the schedule it receives is that of the 5,000-host
  * synthetic design in racks (over 10,000 cables, the build-sheet bench's), served in place of the demo
- * version's. Every animation frame the list moves one fling step; the time between frames is
- * recorded. Prints the longest frame, the 95th percentile and the median, and exits 1 when a frame
+ * version's. Every animation frame the list moves one fling step (28,800 px/s on the phone, 14,400 on the
+ * table: a fast fling, common practice) to the very end; the time between frames is recorded. Prints the longest frame, the 95th percentile and the median, and exits 1 when a frame
  * is over the 50 ms target (issue 10) or the last row was never drawn.
  */
 import { chromium, type Browser } from '@playwright/test';
@@ -28,8 +28,8 @@ function percentile(samples: number[], p: number): number {
 
 type Layout = { name: string; width: number; height: number; rowTestId: string; stepPx: number };
 const LAYOUTS: Layout[] = [
-  { name: 'phone 390×844, cards', width: 390, height: 844, rowTestId: 'schedule-card-', stepPx: 2400 },
-  { name: 'wide 1440×900, table', width: 1440, height: 900, rowTestId: 'schedule-row-', stepPx: 1200 },
+  { name: 'phone 390×844, cards', width: 390, height: 844, rowTestId: 'schedule-card-', stepPx: 480 },
+  { name: 'wide 1440×900, table', width: 1440, height: 900, rowTestId: 'schedule-row-', stepPx: 240 },
 ];
 
 /**
