@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import { Link } from 'expo-router';
-import { Icon, Text, colors, space } from '@/components/ui';
+import { useRouter } from 'expo-router';
+import { Text, colors, space } from '@/components/ui';
 import { cableHref } from '@/lib/designs/links';
 import { endText, placeText, type Sort, type SortKey } from '@/lib/schedule/view';
 import { lengthText } from '@/shared/labels/content';
@@ -72,22 +72,21 @@ export function ScheduleTableHeader({ sort, onSort }: { sort: Sort; onSort: (key
 }
 
 export const ScheduleTableRow = memo(function ScheduleTableRow({ row, id, n }: { row: ScheduleRow; id: number; n: number }) {
+  const router = useRouter();
   const values = cells(row);
   return (
-    <Link href={cableHref(id, n, row.id)} asChild>
-      <Pressable role="link" aria-label={`${row.label}: ${values.near} to ${values.far}`} style={ROW_STYLE} testID={`schedule-row-${row.id}`}>
-        {TABLE_COLUMNS.map((column) => (
-          <View key={column.key} style={{ flex: column.flex }}>
-            <Text variant={column.key === 'label' ? 'smallStrong' : 'small'} numberOfLines={1}>
-              {values[column.key]}
-            </Text>
-          </View>
-        ))}
-        <View style={styles.chevron}>
-          <Icon name="chevron" size={18} color="inkMuted" />
+    <Pressable role="link" onPress={() => router.push(cableHref(id, n, row.id))} aria-label={`${row.label}: ${values.near} to ${values.far}`} style={ROW_STYLE} testID={`schedule-row-${row.id}`}>
+      {TABLE_COLUMNS.map((column) => (
+        <View key={column.key} style={{ flex: column.flex }}>
+          <Text variant={column.key === 'label' ? 'smallStrong' : 'small'} numberOfLines={1}>
+            {values[column.key]}
+          </Text>
         </View>
-      </Pressable>
-    </Link>
+      ))}
+      <Text variant="bodyStrong" color="inkMuted" style={styles.chevron} aria-hidden>
+        ›
+      </Text>
+    </Pressable>
   );
 });
 
@@ -100,5 +99,5 @@ const styles = StyleSheet.create({
   chevron: { width: 18 },
 });
 
-/** One style object, not an array: `<Link asChild>` merges its child's style as an object (DEVELOPERS.md). */
+/** One style object for every row, flattened once. */
 const ROW_STYLE = StyleSheet.flatten([styles.row, styles.body]);

@@ -6,7 +6,8 @@ import { designResponse, docs, versionSummary } from '../designs/helpers';
 import { renderWithClient } from '../helpers/render';
 
 jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
-jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children, useRouter: () => ({ push: mockPush }) }));
 jest.mock('react-native/Libraries/Utilities/useWindowDimensions', () => ({ __esModule: true, default: jest.fn() }));
 const dimensions: jest.Mock = jest.requireMock('react-native/Libraries/Utilities/useWindowDimensions').default;
 const get = api.get as jest.Mock;
@@ -27,6 +28,7 @@ const touches = (row: ScheduleRow, device: string) => row.a.device === device ||
 
 beforeEach(() => {
   get.mockReset();
+  mockPush.mockReset();
   dimensions.mockReturnValue(phone);
 });
 
@@ -57,6 +59,14 @@ describe('schedule on a phone', () => {
     fireEvent.changeText(search, `${device} ${target.a.part ?? ''} ${port}`.replace(/\s+/g, ' '));
     expect(await screen.findByTestId(`schedule-card-${target.id}`)).toBeOnTheScreen();
     expect(screen.getByTestId('schedule-count')).not.toHaveTextContent(`${ofDevice.length} of`);
+  });
+
+  it('opens the cable detail of the card tapped, with the id percent-encoded', async () => {
+    const schedule = serve();
+    renderWithClient(<ScheduleScreen id={1} n={2} />);
+    const row = schedule.cables[0];
+    fireEvent.press(await screen.findByTestId(`schedule-card-${row.id}`));
+    expect(mockPush).toHaveBeenCalledWith(`/designs/1/versions/2/cables/${encodeURIComponent(row.id)}`);
   });
 
   it('says so when nothing matches', async () => {
