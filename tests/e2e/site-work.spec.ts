@@ -81,20 +81,22 @@ test('the checklist opens with the safety briefing and its planned session count
   for (const result of report.hosts) planned.set(nameOf.get(result.host)!, (planned.get(nameOf.get(result.host)!) ?? 0) + result.sessions);
   expect([...planned.values()].some((count) => count > 0)).toBe(true);
 
-  // The login steps are far down the list: show only the open steps of the hosts by scrolling to each.
-  const logins = page.locator('[data-testid^="step-login-"][data-testid$="-sessions"]');
+  // The login steps are far down the list.
   const seen = new Map<string, number>();
   for (let round = 0; round < 40 && seen.size < planned.size; round++) {
-    for (const sessions of await logins.all()) {
-      const row = page.getByTestId((await sessions.getAttribute('data-testid'))!.replace(/-sessions$/, ''));
-      const title = (await row.getByRole('heading').or(row.locator('div').first()).first().innerText()).split('\n')[0];
+    // Read the login rows drawn now in one go: the virtualised list redraws as it scrolls.
+    const drawn = await page.evaluate(() =>
+      Array.from(document.querySelectorAll('[data-testid^="step-login-"][data-testid$="-sessions"]')).map((sessions) => {
+        const rowId = sessions.getAttribute('data-testid')!.replace(/-sessions$/, '');
+        return { title: document.querySelector(`[data-testid="${rowId}-title"]`)?.textContent ?? '', sessions: sessions.textContent ?? '' };
+      }),
+    );
+    for (const { title, sessions } of drawn) {
       const host = /^Log (.+) in:/.exec(title)?.[1];
-      if (host) seen.set(host, Number(await sessions.innerText()));
+      if (host) seen.set(host, Number(sessions));
     }
-    await page.getByTestId('checklist-screen').evaluate((el) => {
-      const scroller = (el.querySelector('[data-testid="checklist-screen"] > div') as HTMLElement | null) ?? el;
-      (scroller.scrollHeight > scroller.clientHeight ? scroller : el).scrollBy(0, 800);
-    });
+    // The checklist is a virtualised list: scroll it to draw the rows further down.
+    await page.getByTestId('checklist-screen').evaluate((el) => el.scrollBy(0, 800));
     await page.waitForTimeout(100);
   }
   // The stored report's sessions per host (RFC 7143 sessions as the analysis plans them).
