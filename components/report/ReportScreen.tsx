@@ -6,6 +6,7 @@ import { QueryStatus } from '@/components/designs/QueryStatus';
 import { FailureUnits } from '@/components/report/FailureUnits';
 import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
+import { LoginPlanCard } from '@/components/report/LoginPlanCard';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
@@ -80,6 +81,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
               <HostAccess rows={rows} unreached={unreached} namer={lookups.namer} index={lookups.index} />
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
+              <LoginPlanCard id={id} n={n} />
             </View>
           </View>
         </>

@@ -23,6 +23,8 @@ export type Analysis = {
   /** The same for a document that is already JSON text (a stored version being restored). */
   prepareJson(documentJson: string, labels?: LabelHistory): Promise<Result<PreparedText>>;
   report(documentJson: string): Promise<Result<StoredReport>>;
+  /** afterOneFailure (api.md `--after-one`) of a stored document, as JSON text. */
+  afterOne(documentJson: string): Promise<Result<{ afterOneJson: string }>>;
 };
 
 const TASKS_MODULE = path.join(__dirname, '..', 'analysis', 'tasks.ts');
@@ -41,6 +43,7 @@ export function poolAnalysis(limits: Config['analysis']): Analysis {
     prepare: (document, labels) => runTask(pool, limits, 'prepare', prepareInput(JSON.stringify(document), labels), 'it was not saved'),
     prepareJson: (documentJson, labels) => runTask(pool, limits, 'prepare', prepareInput(documentJson, labels), 'it was not saved'),
     report: (documentJson) => runTask(pool, limits, 'report', documentJson, 'its report cannot be shown'),
+    afterOne: (documentJson) => runTask(pool, limits, 'after-one', documentJson, 'its after-one-failure analysis cannot be shown'),
   };
 }
 
@@ -53,6 +56,7 @@ export function inProcessAnalysis(): Analysis {
     prepare: async (document, labels) => outcome(tasks.prepare(prepareInput(JSON.stringify(document), labels)), 'it was not saved'),
     prepareJson: async (documentJson, labels) => outcome(tasks.prepare(prepareInput(documentJson, labels)), 'it was not saved'),
     report: async (documentJson) => outcome(tasks.report(documentJson), 'its report cannot be shown'),
+    afterOne: async (documentJson) => outcome(tasks.afterOne(documentJson), 'its after-one-failure analysis cannot be shown'),
   };
 }
 

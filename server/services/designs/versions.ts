@@ -98,6 +98,21 @@ export function createVersionService(deps: DesignDeps) {
       return computed;
     },
 
+    /**
+     * afterOneFailure as JSON text: stored with the version when it was saved; for a version stored
+     * without it (saved before, or past the save's budget) computed in the analysis pool on each request.
+     */
+    async afterOne(viewer: User, id: number, n: number): Promise<Result<{ afterOneJson: string }>> {
+      const opened = await openVersion(models, viewer, id, n);
+      if (!opened.ok) return opened;
+      const { row } = opened.value.record;
+      const stored = await models.DesignVersion.findByPk(row.id, { attributes: ['id', 'afterOne'] });
+      if (stored?.afterOne) return ok({ afterOneJson: stored.afterOne });
+      const computed = await analysis.afterOne(await loadDocumentText(models, row.id));
+      if (!computed.ok && computed.kind === 'invalid') throw new Error(`stored version ${row.id} no longer validates: ${computed.message}`);
+      return computed;
+    },
+
     /** What changed going from version `against` to version `n`: `against` is the before side, `n` the after side. */
     async diff(viewer: User, id: number, n: number, against: number): Promise<Result<TopologyDiff>> {
       const opened = await openVersion(models, viewer, id, n);

@@ -4,9 +4,11 @@ import { api } from '@/lib/api/client';
 import { createNamer } from '@/lib/report/names';
 import { analyze } from '@/shared/analysis/analyze';
 import { summarize } from '@/shared/analysis/summary';
+import { loginPlan } from '@/shared/handover/login-plan';
 import type { Topology } from '@/shared/topology/schema';
 import { designResponse, docs, people, versionDetail, versionSummary } from '../designs/helpers';
-import { renderWithClient } from '../helpers/render';
+import { createTestQueryClient, renderWithClient } from '../helpers/render';
+import { handoverKeys } from '@/lib/api/handover';
 
 jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
 jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
@@ -18,15 +20,20 @@ function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
   get.mockImplementation(async (path: string) => {
     if (path === `/api/designs/1/versions/${n}`) return { version: versionDetail({ number: n, doc }) };
     if (path === `/api/designs/1/versions/${n}/report`) return { report, summary: summarize(report, doc) };
+    if (path === `/api/designs/1/versions/${n}/login-plan`) return loginPlan(doc);
     if (path === '/api/designs/1') return designResponse([versionSummary({ number: n, doc })]);
     throw new Error(`unexpected request ${path}`);
   });
   return { doc, report };
 }
 
-function renderReport(n: 1 | 2, doc?: Topology) {
+function renderReport(n: 1 | 2, doc?: Topology, { fetchPlan = false } = {}) {
   const served = serve(n, doc);
-  renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer });
+  const client = createTestQueryClient();
+  // The login plan is a query of its own; tests that do not read it get it up front, so it never
+  // lands after they have finished (outside act).
+  if (!fetchPlan) client.setQueryData(handoverKeys.loginPlan(1, n), loginPlan(served.doc));
+  renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer, client });
   return served;
 }
 
@@ -37,6 +44,7 @@ function cutOffBy(doc: Topology, failed: string[]): string[] {
 }
 
 beforeEach(() => get.mockReset());
+
 
 describe('failure report', () => {
   it('heads the report with the saved summary: redundant hosts of all, errors, warnings, single points', async () => {
@@ -145,5 +153,20 @@ describe('failure report', () => {
     // The hosts that still reach vault-1 are not listed as unreached.
     expect(screen.queryByTestId('report-unreached-wms-db-2')).toBeNull();
     expect(screen.getByTestId('report-host-wms-db-2')).toBeOnTheScreen();
+  });
+});
+
+describe('login plan on the report', () => {
+  it('shows each host of version 2 with the report’s session count and every portal on port 3260', async () => {
+    const { report } = renderReport(2, undefined, { fetchPlan: true });
+    expect(await screen.findByText('Failure report: Harbor Road storage, version 2')).toBeOnTheScreen();
+    for (const host of ['wms-db-1', 'cam-rec-2']) {
+      const sessions = report.hosts.filter((h) => h.host === host).reduce((sum, h) => sum + h.sessions, 0);
+      expect(await screen.findByTestId(`login-plan-${host}-sessions`)).toHaveTextContent(`${sessions} sessions expected`);
+      const lines = screen.getAllByTestId(new RegExp(`^login-plan-${host}-port-.*-target$`));
+      expect(lines).toHaveLength(sessions);
+      // iSCSI's registered TCP port is 3260 (RFC 7143 §15); vault-1's target name is the demo's.
+      for (const line of lines) expect(line).toHaveTextContent(/^\d+\.\d+\.\d+\.\d+:3260 → iqn\.2026-01\.example\.tidewater:storage\.vault-1 /);
+    }
   });
 });
