@@ -102,3 +102,86 @@ test('the checklist opens with the safety briefing and its planned session count
   // The stored report's sessions per host (RFC 7143 sessions as the analysis plans them).
   expect(seen).toEqual(planned);
 });
+
+/** Sign Ines in and find the approved Harbor Road version through the API the screens use. */
+async function harborRoad(page: Page): Promise<{ id: number; n: number }> {
+  await signIn(page, 'ines@tidewater.example');
+  const response = await page.request.get('/api/designs?q=Harbor%20Road');
+  expect(response.status()).toBe(200);
+  const design = (await response.json()).designs.find((d: { name: string }) => d.name === 'Harbor Road storage');
+  expect(design?.approvedVersion).toBeTruthy();
+  return { id: design.id as number, n: design.approvedVersion.number as number };
+}
+
+/** Cables nobody has marked yet, in schedule order (the phone and wide runs share one server). */
+async function unmarked(request: APIRequestContext, id: number, n: number, count: number): Promise<ScheduleRow[]> {
+  const marked = new Set((await history(request, id, n)).flatMap((m) => (m.kind === 'cable' ? [m.cableId] : [])));
+  const rows = (await schedule(request, id, n)).filter((row) => !marked.has(row.id)).slice(0, count);
+  expect(rows).toHaveLength(count);
+  return rows;
+}
+
+const escaped = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+
+test('the installer opens a cable from its label\u2019s QR code, marks it run, and still sees the mark after a reload', async ({ page, baseURL }, testInfo) => {
+  const { id, n } = await harborRoad(page);
+  const [cable] = await unmarked(page.request, id, n, 1);
+  const address = readQr(cableDetailUrl({ appUrl: baseURL!, designId: id, version: n }, cable.id));
+  expect(address).toBe(`${baseURL}/designs/${id}/versions/${n}/cables/${encodeURIComponent(cable.id)}`);
+
+  await page.goto(address);
+  const panel = page.getByTestId('cable-detail-build').getByTestId('cable-marks');
+  await expect(panel.getByTestId('cable-marks-state')).toHaveText('Not started');
+  await expect(panel).toContainText(`On site: ${cable.label}`);
+  await panel.getByTestId('cable-mark-run').click();
+  await expect(panel.getByTestId('cable-marks-state')).toHaveText('Run');
+  await expect(panel.getByTestId('queue-clear')).toBeVisible();
+  await panel.scrollIntoViewIfNeeded();
+  await shot(page, testInfo, 'site-cable-marked');
+
+  await page.reload();
+  await expect(panel.getByTestId('cable-marks-state')).toHaveText('Run');
+  await expect(panel.getByTestId('cable-marks-waiting')).toHaveCount(0);
+  await expect(panel.getByTestId('cable-history-0')).toContainText('Ines Duarte');
+  const marks = (await history(page.request, id, n)).filter((m) => m.kind === 'cable' && m.cableId === cable.id);
+  expect(marks.map((m) => [m.kind === 'cable' ? m.state : null, m.by.name])).toEqual([['run', 'Ines Duarte']]);
+});
+
+test('marks made without a connection wait on the phone and reach the server exactly once when it returns', async ({ page, context }, testInfo) => {
+  const { id, n } = await harborRoad(page);
+  const cables = await unmarked(page.request, id, n, 3);
+  await page.goto(`/designs/${id}/versions/${n}/build/cables`);
+  await expect(page.getByTestId('todo-count')).toBeVisible();
+
+  await context.setOffline(true);
+  await expect(page.getByTestId('queue-offline')).toBeVisible();
+  for (const cable of cables) {
+    // In-app navigation only: with no connection the page cannot be loaded again.
+    await page.getByRole('link', { name: new RegExp(`^Cable ${escaped(cable.label)},`) }).click();
+    const panel = page.getByTestId('cable-detail-build').getByTestId('cable-marks');
+    await expect(panel).toContainText(`On site: ${cable.label}`);
+    await panel.getByTestId('cable-mark-tested').click();
+    await expect(panel.getByTestId('cable-marks-state')).toHaveText('Tested');
+    await expect(panel.getByTestId('cable-marks-waiting')).toHaveText('Waiting to send');
+    await page.goBack();
+    await expect(page.getByTestId('todo-screen')).toBeVisible();
+  }
+  await expect(page.getByTestId('todo-screen').getByTestId('queue-waiting-count')).toHaveText('3 marks waiting to send');
+  await shot(page, testInfo, 'site-offline-queue');
+  // Kept in the phone's storage, so a closed tab loses nothing (lib/build/queue.ts).
+  const stored = await page.evaluate(() => JSON.parse(localStorage.getItem('cablewright.build-queue.v1') ?? '{}').state?.items?.length ?? 0);
+  expect(stored).toBe(3);
+  const ids = new Set(cables.map((c) => c.id));
+  expect((await history(page.request, id, n)).filter((m) => m.kind === 'cable' && ids.has(m.cableId))).toHaveLength(0);
+
+  await context.setOffline(false);
+  await expect(page.getByTestId('todo-screen').getByTestId('queue-clear')).toBeVisible();
+  const sent = async () => (await history(page.request, id, n)).filter((m): m is Extract<HistoryEntry, { kind: 'cable' }> => m.kind === 'cable' && ids.has(m.cableId));
+  // In the order they were made, one mark each (the clientId makes a replay harmless, api.md).
+  expect((await sent()).map((m) => [m.cableId, m.state])).toEqual(cables.map((c) => [c.id, 'tested']));
+
+  await page.reload();
+  await expect(page.getByTestId('todo-screen').getByTestId('queue-clear')).toBeVisible();
+  expect(await page.evaluate(() => JSON.parse(localStorage.getItem('cablewright.build-queue.v1') ?? '{}').state?.items?.length ?? 0)).toBe(0);
+  expect(await sent()).toHaveLength(3);
+});
