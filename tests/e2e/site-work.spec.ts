@@ -185,3 +185,20 @@ test('marks made without a connection wait on the phone and reach the server exa
   expect(await page.evaluate(() => JSON.parse(localStorage.getItem('cablewright.build-queue.v1') ?? '{}').state?.items?.length ?? 0)).toBe(0);
   expect(await sent()).toHaveLength(3);
 });
+
+test('a photo chosen from the files is attached to the cable and shown as a thumbnail', async ({ page }) => {
+  const { id, n } = await harborRoad(page);
+  const [cable] = (await schedule(page.request, id, n)).slice(-1);
+  await page.goto(`/designs/${id}/versions/${n}/cables/${encodeURIComponent(cable.id)}`);
+  const panel = page.getByTestId('cable-detail-build').getByTestId('cable-marks');
+  await expect(panel.getByTestId('cable-marks-state')).toBeVisible();
+  const before = await panel.locator('[data-testid^="cable-photo-"][role="link"]').count();
+  // A 1×1 PNG (PNG signature and IHDR/IDAT/IEND chunks, ISO/IEC 15948), built by hand.
+  const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
+  await panel.getByTestId('cable-photo-add-file-input').setInputFiles({ name: '../../etc/rack.png', mimeType: 'image/png', buffer: png });
+  const thumb = panel.getByTestId(`cable-photo-${before}`);
+  await expect(thumb).toBeVisible();
+  await expect(thumb).toHaveAccessibleName(/^Photo \d+ by Ines Duarte/);
+  // The thumbnail really loads through the team's photo route.
+  await expect.poll(() => thumb.locator('img').evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
+});
