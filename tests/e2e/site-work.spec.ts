@@ -151,7 +151,9 @@ test('marks made without a connection wait on the phone and reach the server exa
   const { id, n } = await harborRoad(page);
   const cables = await unmarked(page.request, id, n, 3);
   await page.goto(`/designs/${id}/versions/${n}/build/cables`);
-  await expect(page.getByTestId('todo-count')).toBeVisible();
+  // Everything the cable pages need offline is loaded first (a busy machine takes its time).
+  await expect(page.getByTestId('todo-count')).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByRole('link', { name: new RegExp(`^Cable ${escaped(cables[0].label)},`) })).toBeVisible();
 
   await context.setOffline(true);
   await expect(page.getByTestId('queue-offline')).toBeVisible();
