@@ -200,7 +200,7 @@ export function CableMarks({ designId, version, cableId, label, queue = buildQue
   );
 }
 
-/** Photos open full size in a new tab on the web; the route is the team's only (api.md). */
+/** Photos open full size in a new tab on the web; the route is the team's only (docs/api.md). */
 function openPhoto(photoId: string) {
   const open = (globalThis as { open?: (url: string, target: string) => unknown }).open;
   if (typeof open === 'function') open(photoUrl(photoId), '_blank');

@@ -6,7 +6,7 @@ import { buildSheetPath, type BuildSheetFile } from '@/lib/api/schedule';
 import { downloadBlob } from '@/lib/download';
 import { exportFileName } from '@/shared/schedule/tables';
 
-/** The server's files of a version's build sheet (api.md), saved under the names the server gives them. */
+/** The server's files of a version's build sheet (docs/api.md), saved under the names the server gives them. */
 const FILES: readonly { file: BuildSheetFile; label: string; what: string; extension: string; testID: string }[] = [
   { file: 'cables.csv', label: 'Cables CSV', what: 'cables', extension: 'csv', testID: 'schedule-export-cables' },
   { file: 'addresses.csv', label: 'Addresses CSV', what: 'addresses', extension: 'csv', testID: 'schedule-export-addresses' },

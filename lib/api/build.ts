@@ -10,7 +10,7 @@ import { withPending, type ShownRecord } from '@/lib/build/pending';
 import { createBuildQueue, defaultQueueStorage, requestOf, type BuildQueue, type BuildQueueState, type FlushReport, type QueuedItem } from '@/lib/build/queue';
 
 /**
- * The site-work routes (api.md) for the phone screens: the build record and its history as
+ * The site-work routes (docs/api.md) for the phone screens: the build record and its history as
  * queries, marks through the offline queue (lib/build/queue.ts) or straight to the server, photos
  * straight to the server. The build record hangs under its version's key, so anything that
  * refreshes a design refreshes its build records too.

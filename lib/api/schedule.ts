@@ -5,7 +5,7 @@ import { useSessionPending } from '@/lib/api/session-gate';
 import type { CableSchedule, ScheduleRow } from '@/shared/schedule/types';
 
 /**
- * The build sheet of one version (api.md): the cable schedule as JSON, and the paths of the files
+ * The build sheet of one version (docs/api.md): the cable schedule as JSON, and the paths of the files
  * the server makes from it. A version never changes, so neither does its schedule.
  */
 export const scheduleKeys = {

@@ -27,7 +27,7 @@ function attempt(run: () => void): string | null {
 
 /**
  * Marking one version from a screen: who may (installers and admins, approved versions still open
- * to marks — shared/roles.ts, api.md), and every mark through the phone's queue, so a mark made
+ * to marks — shared/roles.ts, docs/api.md), and every mark through the phone's queue, so a mark made
  * without signal is kept and sent later.
  */
 export function useMarking(designId: number, version: number, record: ShownRecord | undefined, queue: BuildQueue = buildQueue): Marking {

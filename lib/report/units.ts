@@ -16,8 +16,8 @@ export const UNIT_KIND_LABELS: Record<UnitKind, string> = {
 };
 
 /**
- * Every failure unit of the document (resilience-analysis.md: each cable, card, switch and
- * controller; topology-format.md format 2: each PSU and power feed), the big ones first: switches,
+ * Every failure unit of the document (docs/analysis.md: each cable, card, switch and
+ * controller; docs/topology-format.md format 2: each PSU and power feed), the big ones first: switches,
  * controllers, cards, cables, then feeds and PSUs, in document order.
  */
 export function failureUnits(doc: Topology, index: TopologyIndex = indexTopology(doc)): FailureUnit[] {

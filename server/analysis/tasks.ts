@@ -1,7 +1,10 @@
-import type { Issue } from '@/shared/api/common';
+import { toIssues, type Issue } from '@/shared/api/common';
+import { saveVersionBody } from '@/shared/api/designs';
 import { analyze, analyzeWithAfterOne } from '@/shared/analysis/analyze';
+import { diffTopologies } from '@/shared/diff';
 import { summarize, type ReportSummary } from '@/shared/analysis/summary';
 import { assignStableLabels, labelHistoryFromData, NO_LABEL_HISTORY, type LabelHistoryData } from '@/shared/labels';
+import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import { contentHash } from '@/server/services/designs/canonical';
 
@@ -36,7 +39,54 @@ export type PrepareInput = { documentJson: string; labels?: LabelHistoryData };
 export function prepare(input: PrepareInput): TaskOutcome<PreparedText> {
   const checked = validateTopology(JSON.parse(input.documentJson) as unknown);
   if (!checked.ok) return { ok: false, refused: checked.issues };
-  const doc = assignStableLabels(checked.doc, input.labels ? labelHistoryFromData(input.labels) : NO_LABEL_HISTORY);
+  return analysed(checked.doc, input.labels);
+}
+
+/** A save's body as it came over the wire (JSON text), and the design's label history. */
+export type SaveInput = { bodyText: string; labels?: LabelHistoryData };
+/** A save's fields other than the document, as the body schema reads them. */
+export type SaveFields = { baseVersion: number | null; message: string };
+/**
+ * `malformed`: the body is not JSON (the sentence body-parser's error would have given);
+ * `bodyIssues`: the body's own fields are wrong (paths in the body, as the validate middleware gives them).
+ */
+export type SaveOutcome =
+  | { ok: true; value: { fields: SaveFields; prepared: PreparedText } }
+  | { ok: false; malformed: string }
+  | { ok: false; bodyIssues: Issue[] }
+  | { ok: false; refused: Issue[] }
+  | { ok: false; failed: string };
+
+export const NOT_JSON = 'The request body is not valid JSON.';
+
+/**
+ * The whole save in one task: the body is parsed here, once, and never on the request thread (a
+ * 20,000-host document is megabytes of JSON); its fields are checked with the same schema the
+ * route's validator would use, then the document is validated and analysed as `prepare` does.
+ * As with express.json's strict mode, a body must be a JSON object or array.
+ */
+export function prepareSave(input: SaveInput): SaveOutcome {
+  let body: unknown;
+  if (input.bodyText !== '') {
+    const first = /\S/.exec(input.bodyText)?.[0];
+    if (first !== '{' && first !== '[') return { ok: false, malformed: NOT_JSON };
+    try {
+      body = JSON.parse(input.bodyText) as unknown;
+    } catch {
+      return { ok: false, malformed: NOT_JSON };
+    }
+  }
+  const fields = saveVersionBody.safeParse(body);
+  if (!fields.success) return { ok: false, bodyIssues: toIssues(fields.error) };
+  const checked = validateTopology(fields.data.document);
+  if (!checked.ok) return { ok: false, refused: checked.issues };
+  const prepared = analysed(checked.doc, input.labels);
+  if (!prepared.ok) return prepared;
+  return { ok: true, value: { fields: { baseVersion: fields.data.baseVersion, message: fields.data.message }, prepared: prepared.value } };
+}
+
+function analysed(checked: Topology, labels: LabelHistoryData | undefined): TaskOutcome<PreparedText> {
+  const doc = assignStableLabels(checked, labels ? labelHistoryFromData(labels) : NO_LABEL_HISTORY);
   try {
     const { report, afterOneFailure } = analyzeWithAfterOne(doc, Date.now() + AFTER_ONE_SAVE_BUDGET_MS);
     const afterOneJson = afterOneFailure ? JSON.stringify(afterOneFailure) : null;
@@ -69,9 +119,35 @@ export function afterOne(documentJson: string): TaskOutcome<{ afterOneJson: stri
   }
 }
 
+/**
+ * A stored document as format 2 JSON text: a format 1 version is upgraded on every read (it is never
+ * rewritten), which means validating it, so it is done here rather than on the request thread.
+ */
+export function storedDocument(documentJson: string): TaskOutcome<string> {
+  const checked = validateTopology(JSON.parse(documentJson) as unknown);
+  if (!checked.ok) return { ok: false, refused: checked.issues };
+  return { ok: true, value: JSON.stringify(checked.doc) };
+}
+
+/** What changed going from the stored document `before` to `after` (both JSON text), as JSON text. */
+export function diff(input: { before: string; after: string }): TaskOutcome<string> {
+  const before = validateTopology(JSON.parse(input.before) as unknown);
+  if (!before.ok) return { ok: false, refused: before.issues };
+  const after = validateTopology(JSON.parse(input.after) as unknown);
+  if (!after.ok) return { ok: false, refused: after.issues };
+  try {
+    return { ok: true, value: JSON.stringify(diffTopologies(before.doc, after.doc)) };
+  } catch (error) {
+    return { ok: false, failed: error instanceof Error ? error.message : String(error) };
+  }
+}
+
 /** Every task by name; the child process looks tasks up here (a Map: names come over a channel). */
 export const TASKS = new Map<string, (input: never) => unknown>([
   ['prepare', prepare],
+  ['prepareSave', prepareSave],
   ['report', report],
   ['after-one', afterOne],
+  ['storedDocument', storedDocument],
+  ['diff', diff],
 ]);

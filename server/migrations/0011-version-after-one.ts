@@ -2,7 +2,7 @@ import { DataTypes } from 'sequelize';
 import type { Migration } from './types';
 
 /**
- * The after-one-failure analysis (api.md `--after-one`) stored with each version as JSON text, computed
+ * The after-one-failure analysis (docs/api.md `--after-one`) stored with each version as JSON text, computed
  * in the analysis process when the version is saved, beside its report (0006). Null on versions saved
  * before, and on a version whose after-one analysis did not finish within the save's budget: the
  * after-one route then computes it in the analysis pool on each request, and nothing is written back.

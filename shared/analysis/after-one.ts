@@ -4,7 +4,7 @@ import { powerSpofs, ResilienceEngine, type Resilience } from '@/shared/analysis
 import type { AfterOneResult, ExposedPair, HostArrayPair } from '@/shared/analysis/types';
 
 /**
- * After one failure (api.md, `--after-one`): for every failure unit not owned by a single host —
+ * After one failure (docs/api.md, `--after-one`): for every failure unit not owned by a single host —
  * switches, controllers, cables that touch no host port (inter-switch and array-side), the PSUs of
  * switches and arrays, and every power feed — the host/array pairs it cuts off while it is down,
  * and the pairs it leaves with a single point of failure, with those points. This is the question a

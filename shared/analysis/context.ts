@@ -19,7 +19,7 @@ export type AnalysisContext = {
   /** The units asked for, as given. */
   requested: readonly string[];
   power: PowerModel;
-  /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
+  /** With no networks at all, every data port pairs with every other (docs/analysis.md). */
   hasNetworks: boolean;
   /** The cables that can carry a data path, in document order; filled on first use (see dataCables). */
   cache: { dataCables?: readonly DataCableEnds[]; ips?: Map<string, Ip | null> };

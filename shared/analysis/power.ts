@@ -1,7 +1,7 @@
 import type { Device, PowerFeed, Psu, Topology } from '@/shared/topology/schema';
 
 /**
- * Power as failure units (topology-format.md, format 2): every PSU and every power feed is a unit.
+ * Power as failure units (docs/topology-format.md, format 2): every PSU and every power feed is a unit.
  * A device is down when every one of its PSUs is down — the PSU failed, or the feed it is on failed.
  * A device without PSUs is never taken down by power. A controller is powered by its array's PSUs,
  * a card by its host's.

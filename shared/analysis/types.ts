@@ -1,4 +1,4 @@
-/** The analysis report (resilience-analysis.md): the same shape in the browser and on the server. */
+/** The analysis report (docs/analysis.md): the same shape in the browser and on the server. */
 export type Severity = 'error' | 'warning' | 'info';
 
 export type UnitKind = 'cable' | 'adapter' | 'switch' | 'controller' | 'psu' | 'feed';
@@ -22,7 +22,7 @@ export type Finding = { rule: string; severity: Severity; subjects: string[]; me
 /** A pair left up while one unit is down, and what alone would then cut it off. */
 export type ExposedPair = { host: string; array: string; singlePointsOfFailure: string[] };
 
-/** One unit down (api.md `--after-one`): the pairs it cuts off, and those it leaves exposed. */
+/** One unit down (docs/api.md `--after-one`): the pairs it cuts off, and those it leaves exposed. */
 export type AfterOneResult = { failed: string; exposed: ExposedPair[]; cutOff: HostArrayPair[] };
 
 export type Report = {
@@ -36,6 +36,6 @@ export type Report = {
 export type AnalyzeOptions = {
   /** Units (cable, card, switch, controller ids) to treat as failed before anything is computed. */
   failed?: readonly string[];
-  /** Add `afterOneFailure` (api.md `--after-one`). */
+  /** Add `afterOneFailure` (docs/api.md `--after-one`). */
   afterOne?: boolean;
 };

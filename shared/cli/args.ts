@@ -3,7 +3,7 @@
  * may be given any number of times, as `--failed=a,b` or `--failed a,b`; the ids of every
  * occurrence add up (a repeated id counts once). Ids are separated by commas, so an id that holds a
  * comma cannot be named here. `--` ends the options: what follows is a file name even when it
- * begins with `--`. `--after-one` adds `afterOneFailure` to each report (api.md).
+ * begins with `--`. `--after-one` adds `afterOneFailure` to each report (docs/api.md).
  */
 export type CliArgs = { ok: true; files: string[]; failed: string[]; afterOne: boolean } | { ok: false; reason: string };
 

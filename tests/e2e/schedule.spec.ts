@@ -13,7 +13,7 @@ async function openSchedule(page: import('@playwright/test').Page) {
   await page.locator('[data-testid^="design-"]').filter({ hasText: 'Harbor Road storage' }).first().click();
   await expect(page.getByTestId('design-screen')).toBeVisible();
   const id = designIdFromUrl(page);
-  // An installer reads approved versions only; the demo approved version 2 (product.md).
+  // An installer reads approved versions only; the demo approved version 2 (docs/demo.md).
   await page.goto(`/designs/${id}/versions/2`);
   await page.getByTestId('version-schedule').click();
   await expect(page.getByTestId('schedule-screen')).toBeVisible();
@@ -24,7 +24,7 @@ async function openSchedule(page: import('@playwright/test').Page) {
 
 test('an installer searches a label, opens the cable and sees both ends', async ({ page }, testInfo) => {
   const { id, schedule } = await openSchedule(page);
-  // cam-rec-2's cable through its second card: the one version 2 added (product.md).
+  // cam-rec-2's cable through its second card: the one version 2 added (docs/demo.md).
   const row = schedule.cables.find((c) => c.b.device === 'cam-rec-2' || c.a.device === 'cam-rec-2')!;
   expect(row).toBeDefined();
   await expect(page.getByTestId('schedule-count')).toHaveText(`${schedule.cables.length} cables`);

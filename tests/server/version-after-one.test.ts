@@ -6,7 +6,7 @@ import { makeTestApp, signInAs, type Agent, type TestApp } from './helpers/app';
 import { designId, harborV2, saveOnTop } from './helpers/designs';
 
 /**
- * afterOneFailure (api.md `--after-one`) is computed in the analysis process when a version is saved
+ * afterOneFailure (docs/api.md `--after-one`) is computed in the analysis process when a version is saved
  * and stored beside its report; GET …/after-one serves it. A version stored without it is analysed
  * on request, and nothing is written to the old row.
  */

@@ -5,7 +5,7 @@ import { Draft } from './helpers/draft';
 import { allUnits, bruteForceAfterOne, bruteForcePowerHosts, randomPowerDesign } from './helpers/power-oracle';
 import { randomFailures } from './helpers/random-design';
 
-// Power as failure units (topology-format.md, format 2) and afterOneFailure (api.md `--after-one`),
+// Power as failure units (docs/topology-format.md, format 2) and afterOneFailure (docs/api.md `--after-one`),
 // checked against the brute-force reference: fail every unit (and every pair of units), search again.
 const DESIGNS = 520;
 

@@ -3,7 +3,7 @@ import type { Finding } from '@/shared/analysis/types';
 import { displayName } from '@/shared/topology/index';
 
 /**
- * Power drafting mistakes (topology-format.md, format 2): a PSU on no feed, and a device whose
+ * Power drafting mistakes (docs/topology-format.md, format 2): a PSU on no feed, and a device whose
  * supplies all hang on one feed. Findings, never refusals. A PSU on no feed is taken by the analysis
  * as never losing its supply, so what the report says about it may be too kind: a warning. A device
  * with every supply on one feed goes down with that feed — a second supply only helps on a second

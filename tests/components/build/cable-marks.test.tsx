@@ -39,7 +39,7 @@ describe('cable check-off panel', () => {
     fireEvent.press(screen.getByTestId('cable-mark-run'));
     const items = queue.getState().items;
     expect(items).toHaveLength(1);
-    // api.md: POST …/build/marks {cableId, state, note?, clientId}; clientId a UUID (RFC 9562).
+    // docs/api.md: POST …/build/marks {cableId, state, note?, clientId}; clientId a UUID (RFC 9562).
     const { path, body } = requestOf(items[0]);
     expect(path).toBe('/api/designs/1/versions/2/build/marks');
     expect(body).toEqual({ cableId: 'c1', state: 'run', clientId: items[0].clientId });
@@ -55,7 +55,7 @@ describe('cable check-off panel', () => {
     await screen.findByTestId('cable-marks-state');
     fireEvent.press(screen.getByTestId('cable-mark-problem'));
     fireEvent.press(screen.getByTestId('cable-problem-save'));
-    // api.md / issue 11: a problem needs a note; the queue refuses it with the route's own sentence.
+    // docs/api.md / issue 11: a problem needs a note; the queue refuses it with the route's own sentence.
     expect(screen.getByTestId('cable-marks-message')).toHaveTextContent(PROBLEM_NEEDS_NOTE);
     expect(queue.getState().items).toHaveLength(0);
     fireEvent.changeText(screen.getByTestId('cable-problem-note'), 'Connector cracked at the switch end');

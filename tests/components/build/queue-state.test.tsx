@@ -49,7 +49,7 @@ describe('queue state', () => {
     expect(await screen.findByTestId('queue-sending')).toHaveTextContent('Sending…');
     await act(async () => finish());
     await waitFor(() => expect(screen.getByTestId('queue-clear')).toBeOnTheScreen());
-    // api.md: marks go to POST …/build/marks with the clientId made when they were queued.
+    // docs/api.md: marks go to POST …/build/marks with the clientId made when they were queued.
     expect(post.mock.calls.map(([path, body]) => [path, body.clientId])).toEqual([
       ['/api/designs/1/versions/2/build/marks', a.clientId],
       ['/api/designs/1/versions/2/build/marks', b.clientId],

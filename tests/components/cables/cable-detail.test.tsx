@@ -41,7 +41,7 @@ describe('cable detail', () => {
     const far = screen.getByTestId('cable-detail-b');
     expect(within(far).getByTestId('cable-detail-b-device')).toHaveTextContent(row.b.device);
     expect(within(far).getByTestId('cable-detail-b-part')).toHaveTextContent(row.b.part!);
-    // The array's part is a controller (topology-format.md: arrays hold controllers, hosts cards).
+    // The array's part is a controller (docs/topology-format.md: arrays hold controllers, hosts cards).
     expect(await within(far).findByText('Controller')).toBeOnTheScreen();
     expect(within(far).getByTestId('cable-detail-b-port')).toHaveTextContent(row.b.port);
     expect(within(far).getByTestId('cable-detail-b-rack')).toHaveTextContent(row.b.rack!);
@@ -52,7 +52,7 @@ describe('cable detail', () => {
     const row = schedule.cables.find((c) => c.vlan !== null && c.estimatedLengthM !== null)!;
     renderWithClient(<CableDetailScreen id={1} n={2} cableId={row.id} />);
     await screen.findByTestId('cable-detail-facts');
-    // The demo's fabric cables are Category 6A (product.md); ANSI/TIA-568.2-D's name for the media.
+    // The demo's fabric cables are Category 6A (docs/demo.md); ANSI/TIA-568.2-D's name for the media.
     expect(row.media).toBe('cat6a');
     expect(screen.getByTestId('cable-detail-media')).toHaveTextContent('Category 6A');
     expect(screen.getByTestId('cable-detail-length')).toHaveTextContent(row.lengthM === null ? 'length not set' : `${row.lengthM} m`);

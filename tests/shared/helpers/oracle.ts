@@ -3,7 +3,7 @@ import type { Topology } from '@/shared/topology/schema';
 
 /**
  * The brute-force method the analysis must agree with, written straight from
- * resilience-analysis.md and sharing no code with it: count sessions by searching from every host
+ * docs/analysis.md and sharing no code with it: count sessions by searching from every host
  * data port, then fail each unit in turn and search everything again. Quadratic on purpose.
  */
 type PortInfo = {

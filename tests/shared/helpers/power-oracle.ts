@@ -4,7 +4,7 @@ import { failureUnits, sessionsTable, type Table } from './oracle';
 import { mulberry32, randomDesign } from './random-design';
 
 /**
- * The brute-force reference with power, written from topology-format.md (format 2) and api.md and
+ * The brute-force reference with power, written from docs/topology-format.md (format 2) and docs/api.md and
  * sharing no code with the analysis: a device is down when every PSU it has is down (the PSU failed
  * or its feed failed), and a device that is down takes its ports with it — a switch itself, an array
  * all its controllers, a host all its cards. Single points of failure: fail each unit, search
@@ -63,7 +63,7 @@ export function bruteForcePowerHosts(doc: Topology, failed: string[] = []): Host
   return result.sort((x, y) => order(x.host, y.host) || order(x.array, y.array));
 }
 
-/** The units api.md lists for `--after-one`: everything not owned by a single host. */
+/** The units docs/api.md lists for `--after-one`: everything not owned by a single host. */
 export function sharedUnits(doc: Topology): string[] {
   const hostPorts = new Set<string>();
   const units: string[] = [];
