@@ -6,6 +6,7 @@ import { QueueState } from '@/components/build/QueueState';
 import { QueryStatus } from '@/components/designs/QueryStatus';
 import { buildQueue, photoUrl, useBuildHistory, useBuildQueue, useOnline, useShownBuild, useUploadPhoto } from '@/lib/api/build';
 import { useMe } from '@/lib/api/auth';
+import { useScheduleRow } from '@/lib/api/schedule';
 import { undoMark } from '@/lib/build/pending';
 import type { BuildQueue, QueuedMark } from '@/lib/build/queue';
 import { useMarking } from '@/lib/build/use-marking';
@@ -49,7 +50,8 @@ export function CableMarks({ designId, version, cableId, label, queue = buildQue
   const items = useBuildQueue((s) => s.items, queue);
   const [problem, setProblem] = useState<string | null>(null);
   const [message, setMessage] = useState<{ tone: 'error' | 'info'; text: string } | null>(null);
-  const name = label ?? cableId;
+  const { row } = useScheduleRow(designId, version, cableId);
+  const name = label ?? row?.label ?? cableId;
 
   const queued = items.filter((i): i is QueuedMark => i.kind === 'mark' && i.designId === designId && i.version === version && i.fields.cableId === cableId && i.userId === me?.id);
   const marks = (history.data ?? []).filter((m): m is CableHistoryEntry => m.kind === 'cable' && m.cableId === cableId);
@@ -109,6 +111,7 @@ export function CableMarks({ designId, version, cableId, label, queue = buildQue
 
   return (
     <View style={styles.wrap} testID="cable-marks">
+      <Heading level={2}>{`On site: ${name}`}</Heading>
       <View style={styles.current}>
         <Text variant="smallStrong">Now</Text>
         <Badge label={STATE_LABELS[state]} tone={STATE_TONES[state]} testID="cable-marks-state" />

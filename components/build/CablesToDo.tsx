@@ -4,9 +4,11 @@ import { Link } from 'expo-router';
 import { Badge, Button, Heading, Icon, SegmentedPicker, Text, colors, radius, space, CONTENT_MAX_WIDTH, TAP_TARGET } from '@/components/ui';
 import { QueueState } from '@/components/build/QueueState';
 import { QueryStatus } from '@/components/designs/QueryStatus';
-import { useBuildCables, useShownBuild } from '@/lib/api/build';
+import { useShownBuild } from '@/lib/api/build';
+import { useCableSchedule } from '@/lib/api/schedule';
 import { useDesign } from '@/lib/api/designs';
-import { cableHref, checklistHref } from '@/lib/build/links';
+import { checklistHref } from '@/lib/build/links';
+import { cableHref } from '@/lib/designs/links';
 import type { ShownCable } from '@/lib/build/pending';
 import { plural, STATE_LABELS, STATE_TONES } from '@/lib/build/words';
 import { DONE_STATE } from '@/shared/api/build';
@@ -29,7 +31,9 @@ function endText(end: ScheduleEnd): string {
  */
 export function CablesToDo({ id, n, rackId = null }: { id: number; n: number; rackId?: string | null }) {
   const design = useDesign(id);
-  const cables = useBuildCables(id, n);
+  // The schedule screen's own cached answer: a cable opened from here (or offline) needs no new request.
+  const schedule = useCableSchedule(id, n);
+  const cables = { ...schedule, data: schedule.data?.cables };
   const { shown, query } = useShownBuild(id, n);
   const [filter, setFilter] = useState<Filter>('open');
   const racks = useMemo(() => shown?.progress.racks ?? [], [shown]);

@@ -38,7 +38,7 @@ export const StepRow = memo(function StepRow({ step, status, index, canMark, onM
     <View style={[styles.row, step.caution && styles.caution, done && styles.done]} testID={testID}>
       <View style={styles.head}>
         {step.caution ? <Icon name="warning" size={22} color="warningText" /> : null}
-        <Text variant="bodyStrong" style={styles.title} color={ink}>
+        <Text variant="bodyStrong" style={styles.title} color={ink} testID={`${testID}-title`}>
           {step.title}
         </Text>
       </View>

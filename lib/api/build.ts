@@ -3,7 +3,6 @@ import { useEffect, useSyncExternalStore } from 'react';
 import { useStore } from 'zustand';
 import type { BuildResponse, ChecklistResponse, HistoryResponse, MarkBody, MarkResponse, PhotoResponse, StepBody, StepMarkResponse } from '@/shared/api/build';
 import { api } from '@/lib/api/client';
-import type { CableSchedule } from '@/shared/schedule/types';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useMe } from '@/lib/api/auth';
 import { useSessionPending } from '@/lib/api/session-gate';
@@ -189,19 +188,4 @@ export function useOnline(): boolean {
     () => onlineManager.isOnline(),
     () => true,
   );
-}
-
-/**
- * The version's cable schedule (GET …/cables) for the site screens' list of cables to do. Its own
- * key, so it never shares a cache entry with other screens that shape the same answer differently.
- */
-export function useBuildCables(id: number, n: number, options: { enabled?: boolean } = {}) {
-  const pending = useSessionPending();
-  return useQuery({
-    queryKey: [...designKeys.version(id, n), 'build-cables'] as const,
-    queryFn: () => api.get<CableSchedule>(`/api/designs/${id}/versions/${n}/cables`),
-    select: (data) => data.cables,
-    staleTime: VERSION_STALE_MS,
-    enabled: !pending && (options.enabled ?? true),
-  });
 }
