@@ -6,12 +6,14 @@ import { QueryStatus } from '@/components/designs/QueryStatus';
 import { FailureUnits } from '@/components/report/FailureUnits';
 import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
+import { MaintenanceView } from '@/components/report/MaintenanceView';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
 import { WhatIfPanel } from '@/components/report/WhatIfPanel';
 import { useDesign } from '@/lib/api/designs';
-import { useVersion, useVersionReport } from '@/lib/api/versions';
+import { useVersion, useVersionAfterOne, useVersionReport } from '@/lib/api/versions';
+import { exposureOf } from '@/lib/report/maintenance';
 import { designHref } from '@/lib/designs/links';
 import { installPrintStyles, printHidden, printPage } from '@/lib/print';
 import { createNamer } from '@/lib/report/names';
@@ -27,6 +29,7 @@ import { indexTopology } from '@/shared/topology';
 export function ReportScreen({ id, n }: { id: number; n: number }) {
   const version = useVersion(id, n);
   const saved = useVersionReport(id, n);
+  const afterOne = useVersionAfterOne(id, n);
   const design = useDesign(id);
   const doc = version.data?.document;
   const whatIf = useWhatIf(doc);
@@ -72,6 +75,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
                   rows={rows}
                   namer={lookups.namer}
                   pending={whatIf.pending}
+                  exposed={exposureOf(whatIf.simulated.report)}
                   onReset={() => whatIf.setFailed([])}
                 />
               ) : null}
@@ -79,6 +83,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
             <View style={wide ? styles.main : styles.stack}>
               <HostAccess rows={rows} unreached={unreached} namer={lookups.namer} index={lookups.index} />
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
+              <MaintenanceView afterOne={afterOne.data} loading={afterOne.isLoading} baseline={baseline.report} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
             </View>
           </View>

@@ -14,6 +14,7 @@ export const designKeys = {
   design: (id: number) => [...designKeys.all, 'design', id] as const,
   version: (id: number, n: number) => [...designKeys.design(id), 'version', n] as const,
   report: (id: number, n: number) => [...designKeys.version(id, n), 'report'] as const,
+  afterOne: (id: number, n: number) => [...designKeys.version(id, n), 'after-one'] as const,
   diff: (id: number, from: number, to: number) => [...designKeys.design(id), 'diff', from, to] as const,
 };
 

@@ -149,6 +149,8 @@ export type CreateDesignResponse = { design: DesignDto; version: VersionSummary 
 export type VersionResponse = { version: VersionDetail };
 export type SaveVersionResponse = { version: VersionSummary };
 export type ReportResponse = { report: Report; summary: ReportSummary };
+/** GET …/versions/:n/after-one (api.md `--after-one`). */
+export type AfterOneResponse = { afterOneFailure: NonNullable<Report['afterOneFailure']> };
 export type ReviewResponse = { review: VersionReview; design: DesignDto };
 /** GET …/versions/:n/diff?against=m — what changed going from version m (before) to version n (after). */
 export type DiffResponse = { diff: TopologyDiff };
