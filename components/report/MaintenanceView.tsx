@@ -10,6 +10,14 @@ import { tupleKey } from '@/shared/keys/tuple';
 /** Rows shown before "Show every unit": a 5,000-host design has hundreds of units. */
 const FIRST_ROWS = 12;
 
+/** The biggest things first when naming what a host hangs on: a feed explains more than a cable. */
+const KIND_RANK = new Map<string, number>([['feed', 0], ['switch', 1], ['controller', 2], ['psu', 3], ['adapter', 4], ['cable', 5]]);
+
+function biggestFirst(namer: Namer, units: readonly string[]): string[] {
+  const rank = (id: string) => KIND_RANK.get(namer.kindOf(id) ?? 'cable') ?? 5;
+  return [...units].sort((x, y) => rank(x) - rank(y) || (x < y ? -1 : x > y ? 1 : 0));
+}
+
 type MaintenanceViewProps = {
   afterOne: readonly AfterOneResult[] | undefined;
   loading: boolean;
@@ -89,7 +97,7 @@ function UnitRow({ row, namer, open, onToggle }: { row: MaintenanceRow; namer: N
               <Icon name="warning" size={16} color="warningText" />
               <View style={styles.hostText}>
                 <Text variant="smallStrong">{`${namer.device(pair.host)} to ${namer.device(pair.array)}${pair.already ? ' (already exposed)' : ''}`}</Text>
-                <Text variant="small" color="inkMuted">{`exposed through ${pair.singlePointsOfFailure.map(namer.unit).join(', ')}`}</Text>
+                <Text variant="small" color="inkMuted">{`exposed through ${biggestFirst(namer, pair.singlePointsOfFailure).map(namer.unit).join(', ')}`}</Text>
               </View>
             </View>
           ))}

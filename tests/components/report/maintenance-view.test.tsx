@@ -45,7 +45,10 @@ describe('maintenance view', () => {
     const namer = createNamer(doc);
     for (const pair of fabA.exposed) {
       const row = screen.getByTestId(`maintenance-host-fab-a-${pair.host}`);
-      expect(within(row).getByText(`exposed through ${pair.singlePointsOfFailure.map(namer.unit).join(', ')}`)).toBeOnTheScreen();
+      // The switch first, then the card, then the cable: the biggest thing a host hangs on leads.
+      const kinds = ['switch', 'adapter', 'cable'];
+      const ordered = [...pair.singlePointsOfFailure].sort((x, y) => kinds.indexOf(namer.kindOf(x)!) - kinds.indexOf(namer.kindOf(y)!));
+      expect(within(row).getByText(`exposed through ${ordered.map(namer.unit).join(', ')}`)).toBeOnTheScreen();
       expect(pair.singlePointsOfFailure).toContain('fab-b');
     }
   });
