@@ -15,6 +15,7 @@ export const designKeys = {
   version: (id: number, n: number) => [...designKeys.design(id), 'version', n] as const,
   report: (id: number, n: number) => [...designKeys.version(id, n), 'report'] as const,
   reportPage: (id: number, n: number) => [...designKeys.version(id, n), 'report-page'] as const,
+  afterOne: (id: number, n: number) => [...designKeys.version(id, n), 'after-one'] as const,
   diff: (id: number, from: number, to: number) => [...designKeys.design(id), 'diff', from, to] as const,
 };
 

@@ -155,6 +155,8 @@ export type ReportResponse = { report: Report; summary: ReportSummary };
  * (as in ReportResponse).
  */
 export type ReportPageResponse = ReportResponse & { design: DesignDto; version: VersionDetail };
+/** GET …/versions/:n/after-one (api.md `--after-one`). */
+export type AfterOneResponse = { afterOneFailure: NonNullable<Report['afterOneFailure']> };
 export type ReviewResponse = { review: VersionReview; design: DesignDto };
 /** GET …/versions/:n/diff?against=m — what changed going from version m (before) to version n (after). */
 export type DiffResponse = { diff: TopologyDiff };

@@ -156,6 +156,28 @@ describe('drawn cases', () => {
     expect(pairOf(doc).singlePointsOfFailure).toEqual(['h1.psu1']);
   });
 
+  it('takes ids such as constructor and __proto__ for feeds and PSUs like any other', () => {
+    const draft = new Draft()
+      .array('v', { a: 2, b: 2 })
+      .switch('fa')
+      .switch('fb')
+      .host('h1', { c1: 1, c2: 1 })
+      .link('v.a.1', 'fa')
+      .link('v.a.2', 'fb')
+      .link('v.b.1', 'fa')
+      .link('v.b.2', 'fb')
+      .link('h1.c1.1', 'fa')
+      .link('h1.c2.1', 'fb')
+      .feed('constructor')
+      .feed('__proto__');
+    const doc = valid(draft.psus('fa', ['constructor', 'constructor']).psus('fb', ['__proto__']).build());
+    doc.devices.find((d) => d.id === 'fb')!.psus![0].id = 'toString';
+    const report = analyze(doc, { afterOne: true });
+    expect(report.hosts).toEqual(bruteForcePowerHosts(doc));
+    expect(report.afterOneFailure).toEqual(bruteForceAfterOne(doc));
+    expect(report.afterOneFailure!.find((e) => e.failed === 'constructor')!.exposed[0].singlePointsOfFailure).toEqual(['__proto__', 'fb', 'h1.c2', 'k6', 'toString']);
+  });
+
   it('leaves a design without power exactly as before', () => {
     const doc = valid(fabric().build());
     const report = analyze(doc);

@@ -22,6 +22,7 @@ function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
       return { design: designResponse([versionSummary({ number: n, doc })]).design, version: versionDetail({ number: n, doc }), report, summary: summarize(report, doc) };
     }
     if (path === `/api/designs/1/versions/${n}/login-plan`) return loginPlan(doc);
+    if (path === `/api/designs/1/versions/${n}/after-one`) return { afterOneFailure: analyze(doc, { afterOne: true }).afterOneFailure };
     throw new Error(`unexpected request ${path}`);
   });
   return { doc, report };
@@ -58,8 +59,9 @@ describe('failure report', () => {
     // docs/demo.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
     expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
     expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
-    // The screen's data comes in one request, not one each for the design, the version and the report.
-    expect(get.mock.calls.map((c) => c[0])).toEqual(['/api/designs/1/versions/1/report-page']);
+    // The screen's data comes in one request, not one each for the design, the version and the report;
+    // the after-one analysis (megabytes on a large design) comes on its own for the maintenance view.
+    expect(get.mock.calls.map((c) => c[0]).sort()).toEqual(['/api/designs/1/versions/1/after-one', '/api/designs/1/versions/1/report-page']);
   });
 
   it("names cam-rec-2's single points of failure by device and port in version 1", async () => {
