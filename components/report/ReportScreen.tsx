@@ -7,6 +7,7 @@ import { FailureUnits } from '@/components/report/FailureUnits';
 import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
 import { LoginPlanCard } from '@/components/report/LoginPlanCard';
+import { SecretsCard } from '@/components/report/SecretsCard';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
@@ -82,6 +83,9 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
               <LoginPlanCard id={id} n={n} />
+              <View {...printHidden()}>
+                <SecretsCard id={id} />
+              </View>
             </View>
           </View>
         </>
