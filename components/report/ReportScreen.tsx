@@ -8,6 +8,7 @@ import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
 import { LoginPlanCard } from '@/components/report/LoginPlanCard';
 import { MaintenanceView } from '@/components/report/MaintenanceView';
+import { SecretsCard } from '@/components/report/SecretsCard';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
@@ -85,6 +86,9 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
               <MaintenanceView afterOne={afterOne.data} loading={afterOne.isLoading} baseline={baseline.report} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
               <LoginPlanCard id={id} n={n} />
+              <View {...printHidden()}>
+                <SecretsCard id={id} />
+              </View>
             </View>
           </View>
         </>

@@ -8,6 +8,7 @@ import * as versionReports from './0006-version-reports';
 import * as designsListIndex from './0007-designs-list-index';
 import * as buildRecord from './0010-build-record';
 import * as versionAfterOne from './0011-version-after-one';
+import * as chapSecrets from './0012-chap-secrets';
 
 /**
  * Every migration, in order. To add one: create `NNNN-what-it-does.ts` exporting `up` and `down`,
@@ -23,4 +24,5 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, module: Migration
   ['0007-designs-list-index', designsListIndex],
   ['0010-build-record', buildRecord],
   ['0011-version-after-one', versionAfterOne],
+  ['0012-chap-secrets', chapSecrets],
 ];

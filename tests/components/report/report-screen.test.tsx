@@ -9,6 +9,7 @@ import type { Topology } from '@/shared/topology/schema';
 import { designResponse, docs, people, versionDetail, versionSummary } from '../designs/helpers';
 import { createTestQueryClient, renderWithClient } from '../helpers/render';
 import { handoverKeys } from '@/lib/api/handover';
+import { secretKeys } from '@/lib/api/secrets';
 
 jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
 jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
@@ -34,6 +35,8 @@ function renderReport(n: 1 | 2, doc?: Topology, { fetchPlan = false } = {}) {
   // The login plan is a query of its own; tests that do not read it get it up front, so it never
   // lands after they have finished (outside act).
   if (!fetchPlan) client.setQueryData(handoverKeys.loginPlan(1, n), loginPlan(served.doc));
+  // The secrets card has its own test (secrets-card.test.tsx); here no secrets exist yet.
+  client.setQueryData(secretKeys.status(1), { status: { mode: served.doc.security?.chap ?? 'none', generatedAt: null, generatedBy: null, length: null, hosts: [], reveals: [] } });
   renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer, client });
   return served;
 }

@@ -36,6 +36,8 @@ export const PRODUCTION_ENV: Record<string, string> = {
   BCRYPT_COST: '10',
   SEED: 'none',
   APP_URL: 'https://cablewright.example',
+  // 32 bytes as hex (server/config.ts); production refuses to start without one.
+  SECRETS_KEY: '5e'.repeat(32),
 };
 export const PRODUCTION_ORIGIN = 'https://cablewright.example';
 
