@@ -13,6 +13,7 @@ const BUSY_TIMEOUT_MS = 5000;
  * connection for memory databases and the pool is held at one to say so.
  */
 export async function openDatabase(storage: string): Promise<Sequelize> {
+  if (isPostgresUrl(storage)) return openPostgres(storage);
   const inMemory = storage === ':memory:';
   const sequelize = new Sequelize({
     dialect: 'sqlite',
@@ -65,4 +66,20 @@ function oneTransactionAtATime(sequelize: Sequelize): void {
     return run;
   };
   (sequelize as unknown as { transaction: typeof queued }).transaction = queued;
+}
+
+/** `postgres://…` or `postgresql://…`: a PostgreSQL server instead of the SQLite file. */
+export function isPostgresUrl(location: string): boolean {
+  return /^postgres(ql)?:\/\//i.test(location);
+}
+
+/**
+ * The same models and migrations on PostgreSQL (the `pg` driver). Its pool hands out real
+ * connections, so transactions need no queue here; a save race still ends on the unique
+ * (design, number) index, which PostgreSQL enforces across every app server on the database.
+ */
+async function openPostgres(url: string): Promise<Sequelize> {
+  const sequelize = new Sequelize(url, { dialect: 'postgres', logging: false, pool: { max: 10 } });
+  await sequelize.authenticate();
+  return sequelize;
 }

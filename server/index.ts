@@ -20,7 +20,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const sequelize = await openDatabase(config.databasePath);
   const applied = await migrate(sequelize);
   console.log(
-    `Database ${config.databasePath}: ${applied.length ? `applied ${applied.length} migration(s): ${applied.join(', ')}` : 'up to date'}`,
+    `Database ${describeDatabase(config.databasePath)}: ${applied.length ? `applied ${applied.length} migration(s): ${applied.join(', ')}` : 'up to date'}`,
   );
   let accounts: DemoAccount[] = [];
   if (config.seed === 'demo') {
@@ -67,6 +67,14 @@ function listen(app: ReturnType<typeof createApp>, port: number): Promise<Server
 }
 
 export class StartError extends Error {}
+
+/** The database as the log may name it: a PostgreSQL URL without its password. */
+function describeDatabase(location: string): string {
+  if (!/^postgres(ql)?:\/\//i.test(location)) return location;
+  const url = new URL(location);
+  if (url.password) url.password = '***';
+  return url.toString();
+}
 
 function printAccounts(accounts: DemoAccount[]): void {
   if (accounts.length === 0) return;

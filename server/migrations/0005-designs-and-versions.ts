@@ -1,4 +1,5 @@
 import { DataTypes } from 'sequelize';
+import { allowChanges, refuseChanges } from './immutable';
 import type { Migration } from './types';
 
 /**
@@ -47,20 +48,11 @@ export const up: Migration = async ({ context: qi }) => {
   });
   await qi.addIndex('review_events', ['versionId']);
 
-  for (const table of IMMUTABLE) {
-    for (const verb of ['UPDATE', 'DELETE']) {
-      await qi.sequelize.query(
-        `CREATE TRIGGER ${table}_no_${verb.toLowerCase()} BEFORE ${verb} ON ${table} ` +
-          `BEGIN SELECT RAISE(ABORT, '${table} rows are immutable'); END;`,
-      );
-    }
-  }
+  for (const table of IMMUTABLE) await refuseChanges(qi, table);
 };
 
 export const down: Migration = async ({ context: qi }) => {
-  for (const table of IMMUTABLE) {
-    for (const verb of ['update', 'delete']) await qi.sequelize.query(`DROP TRIGGER IF EXISTS ${table}_no_${verb}`);
-  }
+  for (const table of IMMUTABLE) await allowChanges(qi, table);
   await qi.dropTable('review_events');
   await qi.dropTable('design_versions');
   await qi.dropTable('designs');

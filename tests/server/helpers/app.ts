@@ -1,8 +1,9 @@
+import { randomBytes } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Express } from 'express';
-import type { Sequelize } from 'sequelize';
+import { Sequelize } from 'sequelize';
 import request from 'supertest';
 import { createApp } from '@/server/app';
 import { loadConfig, type Config } from '@/server/config';
@@ -76,7 +77,8 @@ export async function makeTestApp({
   // Each app keeps its photos in a folder of its own, removed again by close().
   const photosDir = env.PHOTOS_DIR ? null : mkdtempSync(path.join(tmpdir(), 'cw-test-photos-'));
   const config = loadConfig({ ...TEST_ENV, ...(photosDir ? { PHOTOS_DIR: photosDir } : {}), ...env });
-  const sequelize = await openDatabase(databasePath);
+  const database = databasePath === ':memory:' && process.env.TEST_DATABASE_URL ? await freshPostgres(process.env.TEST_DATABASE_URL) : null;
+  const sequelize = await openDatabase(database ? database.url : databasePath);
   await migrate(sequelize);
   if (seed) await seedDemo(sequelize, createPasswords(config.bcryptCost), { designs: seed !== 'people' });
   const mailer = await createMailer(config);
@@ -91,7 +93,29 @@ export async function makeTestApp({
       await mailer.close();
       await closePhotoPool();
       await sequelize.close();
+      await database?.drop();
       if (photosDir) rmSync(photosDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/**
+ * With TEST_DATABASE_URL (`npm run test:postgres`), a test app that would be in memory gets an
+ * empty PostgreSQL database of its own instead, dropped again when the app closes.
+ */
+async function freshPostgres(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {
+  const name = `cw_test_${randomBytes(6).toString('hex')}`;
+  const admin = new Sequelize(adminUrl, { dialect: 'postgres', logging: false });
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.close();
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  return {
+    url: url.toString(),
+    async drop() {
+      const again = new Sequelize(adminUrl, { dialect: 'postgres', logging: false });
+      await again.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+      await again.close();
     },
   };
 }
