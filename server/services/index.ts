@@ -3,6 +3,7 @@ import { createAuthService } from './auth';
 import { createBuildServices } from './build';
 import type { ServiceDeps } from './deps';
 import { createDesignServices } from './designs';
+import { createHandoverService } from './handover';
 import { createInvitationService } from './invitations';
 import { createPhotoStore } from './photos/store';
 import { createSignInThrottle } from './sign-in-throttle';
@@ -16,6 +17,7 @@ export function createServices(deps: ServiceDeps) {
     team: createTeamService(deps),
     invitations: createInvitationService(deps),
     ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis }),
+    handover: createHandoverService({ models: deps.models, analysis }),
     ...createBuildServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis, photos: createPhotoStore(deps.config.photosDir) }),
   };
 }
