@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { DiffResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
+import type { DiffResponse, ReportPageResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
 import { api, isApiRequestError } from '@/lib/api/client';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useSessionPending } from '@/lib/api/session-gate';
@@ -21,6 +21,26 @@ export function useVersionReport(id: number, n: number) {
   return useQuery({
     queryKey: designKeys.report(id, n),
     queryFn: () => api.get<ReportResponse>(`/api/designs/${id}/versions/${n}/report`),
+    staleTime: VERSION_STALE_MS,
+    enabled: !pending,
+  });
+}
+
+/**
+ * The report screen's data in one request (design, version with its document, report). The version
+ * and its report also go into their own caches, so the version screen opened next asks for nothing.
+ */
+export function useReportPage(id: number, n: number) {
+  const pending = useSessionPending();
+  const queryClient = useQueryClient();
+  return useQuery({
+    queryKey: designKeys.reportPage(id, n),
+    queryFn: async () => {
+      const page = await api.get<ReportPageResponse>(`/api/designs/${id}/versions/${n}/report-page`);
+      queryClient.setQueryData<VersionResponse>(designKeys.version(id, n), { version: page.version });
+      queryClient.setQueryData<ReportResponse>(designKeys.report(id, n), { report: page.report, summary: page.summary });
+      return page;
+    },
     staleTime: VERSION_STALE_MS,
     enabled: !pending,
   });
