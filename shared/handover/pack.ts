@@ -1,5 +1,6 @@
 import type { Finding, Report } from '@/shared/analysis/types';
 import { bringUpSteps, type Step } from '@/shared/build';
+import { loginPlan, type LoginPlan } from '@/shared/handover/login-plan';
 import { rackContents } from '@/shared/racks/occupancy';
 import { rackHeightU } from '@/shared/racks/geometry';
 import { cableSchedule } from '@/shared/schedule';
@@ -15,7 +16,7 @@ import type { ChapMode, Topology } from '@/shared/topology/schema';
  *
  * Sections, in order: cover (design, site, version, author, approval — or "not approved"), the
  * topology picture (drawn by the caller), rack elevations, the address worksheet, the cable schedule,
- * CHAP mode (the mode only: secrets never appear in a document), the bring-up order, the safety
+ * the login plan per host, CHAP mode (the mode only: secrets never appear in a document), the bring-up order, the safety
  * cautions and the open findings (errors and warnings) with the override comment of an approval
  * given over errors.
  */
@@ -45,6 +46,8 @@ export type HandoverPack = {
   racks: RackElevation[];
   addresses: PackTable;
   cables: PackTable;
+  /** Per host: each data port and the target portals and names it logs in to (shared/handover/login-plan.ts). */
+  loginPlan: LoginPlan;
   chap: { mode: ChapMode; text: string };
   steps: Step[];
   cautions: Step[];
@@ -113,6 +116,7 @@ export function handoverPack(doc: Topology, report: Report, meta: HandoverMeta):
         [c.network, c.vlan === null ? null : `VLAN ${c.vlan}`].filter(Boolean).join(' · '),
       ]),
     },
+    loginPlan: loginPlan(doc),
     chap: { mode, text: CHAP_TEXT[mode] },
     steps: steps.filter((s) => !s.caution),
     cautions: steps.filter((s) => s.caution),

@@ -1,6 +1,7 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import request from 'supertest';
+import { loginPlan } from '@/shared/handover/login-plan';
 import { cableSchedule } from '@/shared/schedule';
 import { addressTable, ADDRESS_COLUMNS } from '@/shared/schedule/tables';
 import { closeHandoverPool } from '@/server/services/handover/pool';
@@ -80,6 +81,20 @@ describe('the approved version', () => {
     expect(pages[0]).toContain(approver);
     expect(pages[0]).toContain(approvals.at(-1).createdAt.slice(0, 10));
     for (const page of pages) expect(page).not.toMatch(/not approved/i);
+  });
+
+  it('lists the login plan: every host with its expected sessions and every portal on port 3260', async () => {
+    const all = squeeze(pdfPages(await pdfOf(2)).join('\n'));
+    const plan = loginPlan(harborV2());
+    expect(plan.hosts.length).toBeGreaterThan(3);
+    for (const host of plan.hosts) {
+      expect(all).toContain(squeeze(`${host.name} · ${host.initiator ?? 'no initiator name yet'} · ${host.expectedSessions} sessions expected`));
+      for (const port of host.ports) for (const target of port.targets) {
+        // RFC 7143 §4.2.7.4 / IANA: the iSCSI port is TCP 3260.
+        if (target.portal) expect(target.portal.endsWith(':3260')).toBe(true);
+        if (target.portal) expect(all).toContain(target.portal);
+      }
+    }
   });
 
   it('numbers every page and names the version on each', async () => {

@@ -134,7 +134,7 @@ function cover(doc: Doc, pack: HandoverPack): void {
     doc.y = y + 76;
   }
   doc.moveDown(1);
-  paragraph(doc, 'Contents: topology, rack elevations, address worksheet, cable schedule, CHAP, safety cautions, bring-up order, open findings.', { size: 9, color: MUTED });
+  paragraph(doc, 'Contents: topology, rack elevations, address worksheet, cable schedule, login plan, CHAP, safety cautions, bring-up order, open findings.', { size: 9, color: MUTED });
 }
 
 function picture(doc: Doc, svg: string): void {
@@ -253,6 +253,17 @@ export function renderHandoverPdf({ pack, svg }: PdfInput): Promise<Buffer> {
   heading(doc, 'Cable schedule');
   paragraph(doc, 'Every cable by its label, near end first (the network side), with rack and unit.', { size: 9, color: MUTED });
   table(doc, pack.cables, [1.2, 3, 3, 0.9, 0.8, 1.6]);
+
+  heading(doc, 'Login plan');
+  paragraph(doc, 'For each host: every data port with its address and network, and the target portals (address:3260, RFC 7143) and target names it logs in to.', { size: 9, color: MUTED });
+  for (const host of pack.loginPlan.hosts) {
+    ensureRoom(doc, 70);
+    paragraph(doc, `${host.name} \u00b7 ${host.initiator ?? 'no initiator name yet'} \u00b7 ${host.expectedSessions} sessions expected`, { font: SEMIBOLD, size: 10.5 });
+    table(doc, {
+      header: ['Port', 'Address', 'Network', 'Portal', 'Target name'],
+      rows: host.ports.flatMap((p) => (p.targets.length === 0 ? [[`${p.cardName} ${p.portName}`, p.address ?? '', p.networkName ?? '', 'none reachable', '']] : p.targets.map((t) => [`${p.cardName} ${p.portName}`, p.address ?? '', p.networkName ?? '', t.portal ?? `${t.controllerName} ${t.portName}: no address`, t.iqn ?? '(no target name)']))),
+    }, [1.4, 1.3, 1.3, 1.6, 3]);
+  }
 
   heading(doc, 'CHAP');
   paragraph(doc, pack.chap.text);
