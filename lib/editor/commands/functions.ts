@@ -8,3 +8,4 @@ export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layo
 export { applyPattern } from '@/lib/editor/commands/patterns';
 export { deleteItems } from '@/lib/editor/commands/selection';
 export { assignNetwork } from '@/lib/editor/commands/assign-network';
+export { importHosts } from '@/lib/editor/commands/import';
