@@ -8,6 +8,7 @@ import { migrate } from './migrate';
 import { seedDemo, type DemoAccount } from './seed';
 import { closeWorkbookPool } from './services/build-sheet/xlsx-pool';
 import { closePhotoPool } from './services/photos/photo-pool';
+import { closeHandoverPool } from './services/handover/pool';
 import { createPasswords } from './services/passwords';
 
 export type RunningServer = { url: string; close: () => Promise<void> };
@@ -51,6 +52,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
       await closeWorkbookPool();
       await closeSharedPools();
       await closePhotoPool();
+      await closeHandoverPool();
       await sequelize.close();
     },
   };

@@ -8,6 +8,7 @@ import { buildRoutes } from './build';
 import { buildSheetRoutes } from './build-sheet';
 import { designRoutes } from './designs';
 import { devMailRoutes } from './dev-mail';
+import { handoverRoutes } from './handover';
 import { invitationRoutes } from './invitations';
 import { photoRoutes } from './photos';
 import { secretRoutes } from './secrets';
@@ -24,6 +25,7 @@ export function apiRoutes(services: Services, mailbox: Mailbox | null, config: C
   api.use('/team', teamRoutes(services));
   api.use('/invitations', invitationRoutes(services, config));
   api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services), buildRoutes(services), secretRoutes(services));
+  api.use('/designs', handoverRoutes(services));
   api.use('/photos', photoRoutes(services));
   api.use('/dev/mail', devMailRoutes(mailbox));
   api.use(apiNotFound);

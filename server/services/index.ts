@@ -3,6 +3,7 @@ import { createAuthService } from './auth';
 import { createBuildServices } from './build';
 import type { ServiceDeps } from './deps';
 import { createDesignServices } from './designs';
+import { createHandoverService } from './handover';
 import { createInvitationService } from './invitations';
 import { createPhotoStore } from './photos/store';
 import { createSecretsService } from './secrets';
@@ -18,6 +19,7 @@ export function createServices(deps: ServiceDeps) {
     invitations: createInvitationService(deps),
     ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis }),
     secrets: createSecretsService(deps),
+    handover: createHandoverService({ models: deps.models, analysis }),
     ...createBuildServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis, photos: createPhotoStore(deps.config.photosDir) }),
   };
 }

@@ -9,3 +9,4 @@ export { applyPattern } from '@/lib/editor/commands/patterns';
 export { deleteItems } from '@/lib/editor/commands/selection';
 export { assignNetwork } from '@/lib/editor/commands/assign-network';
 export { addFeed, removeFeed, setPsus } from '@/lib/editor/commands/power';
+export { importHosts } from '@/lib/editor/commands/import';

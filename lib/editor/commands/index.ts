@@ -5,6 +5,7 @@ import { cablingCommands } from '@/lib/editor/commands/cabling';
 import type { CommandDef } from '@/lib/editor/commands/define';
 import type * as Fns from '@/lib/editor/commands/functions';
 import { deviceCommands } from '@/lib/editor/commands/devices';
+import { importCommands } from '@/lib/editor/commands/import';
 import { layoutCommands } from '@/lib/editor/commands/layout';
 import { networkCommands } from '@/lib/editor/commands/networks';
 import { patternCommands } from '@/lib/editor/commands/patterns';
@@ -19,7 +20,7 @@ import { CommandError, commandErrorFromZod } from '@/lib/editor/errors';
  * first, so a bad call from anywhere becomes a CommandError with a field path, never a broken
  * document. Each command is also exported as a plain typed function for direct use.
  */
-const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands, ...assignNetworkCommands, ...powerCommands] as const;
+const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands, ...assignNetworkCommands, ...powerCommands, ...importCommands] as const;
 
 // `command()` widens names to string; the plain functions' names restore them for typed calls.
 type ArgsOf<F> = F extends (doc: Topology, args: infer A) => Topology ? A : never;
