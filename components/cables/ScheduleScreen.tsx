@@ -151,9 +151,11 @@ export function ScheduleScreen({ id, n }: { id: number; n: number }) {
             keyExtractor={(item) => item.row.id}
             renderItem={wide ? renderRow : renderCard}
             getItemLayout={getItemLayout}
-            initialNumToRender={wide ? 24 : 8}
-            maxToRenderPerBatch={wide ? 24 : 10}
-            windowSize={7}
+            // Small batches often: a fling renders a few rows a frame rather than a screenful in one long frame.
+            initialNumToRender={wide ? 20 : 8}
+            maxToRenderPerBatch={wide ? 8 : 4}
+            updateCellsBatchingPeriod={16}
+            windowSize={5}
             style={wide ? styles.table : undefined}
             contentContainerStyle={wide ? undefined : styles.cards}
             keyboardShouldPersistTaps="handled"
