@@ -1,4 +1,4 @@
-import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Page, type TestInfo } from '@playwright/test';
 import jsQR from 'jsqr';
 import type { HistoryEntry } from '@/shared/api/build';
 import type { Report } from '@/shared/analysis/types';
@@ -15,12 +15,13 @@ import { versionDocument } from './designs-helpers';
  */
 
 /** Ines, the demo installer, opens Site work and the first approved version's checklist: its design id and number. */
-async function openChecklist(page: Page): Promise<{ id: number; n: number }> {
+async function openChecklist(page: Page, testInfo: TestInfo): Promise<{ id: number; n: number }> {
   await signIn(page, 'ines@tidewater.example');
   await page.getByTestId('nav-site').click();
   await expect(page.getByTestId('site-home')).toBeVisible();
   const card = page.locator('[data-testid^="site-version-"]').filter({ hasText: 'Harbor Road storage' }).first();
   await expect(card.getByTestId(/site-version-\d+-cables-text/)).toContainText(/\d+ of \d+ tested/);
+  await shot(page, testInfo, 'site-home');
   await card.getByRole('link', { name: 'Open checklist' }).click();
   await expect(page).toHaveURL(/\/designs\/\d+\/versions\/\d+\/build$/);
   const [, id, n] = /\/designs\/(\d+)\/versions\/(\d+)\/build$/.exec(page.url())!;
@@ -63,7 +64,7 @@ function readQr(text: string): string {
 }
 
 test('the checklist opens with the safety briefing and its planned session counts match the report', async ({ page }, testInfo) => {
-  const { id, n } = await openChecklist(page);
+  const { id, n } = await openChecklist(page, testInfo);
   // Issue 11: safety first, deferring to local codes and licensed practice.
   const first = page.locator('[data-testid^="step-"][data-testid$="-done"]').first();
   await expect(first).toHaveAccessibleName(/Safety briefing/);
