@@ -7,4 +7,4 @@ export { autoAssignAddresses, clearAddresses } from '@/lib/editor/commands/addre
 export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layout';
 export { applyPattern } from '@/lib/editor/commands/patterns';
 export { deleteItems } from '@/lib/editor/commands/selection';
-export { assignNetwork } from '@/lib/editor/commands/assign-network';
+export { assignNetwork, bulkAssignNetwork } from '@/lib/editor/commands/assign-network';
