@@ -4,7 +4,7 @@ import path from 'node:path';
 import ipaddr from 'ipaddr.js';
 import { z } from 'zod';
 
-/** The server's whole environment (api.md), parsed once at start so a typo fails loudly instead of later. */
+/** The server's whole environment (docs/api.md), parsed once at start so a typo fails loudly instead of later. */
 const envSchema = z.object({
   NODE_ENV: z.string().optional(),
   PORT: z.coerce.number({ error: 'use a port number from 0 to 65535' }).int().min(0).max(65535).default(8080),

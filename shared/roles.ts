@@ -1,4 +1,4 @@
-/** The four team roles (product brief) and what each may do (api.md role table). */
+/** The four team roles (product brief) and what each may do (docs/api.md role table). */
 export const ROLES = ['admin', 'designer', 'reviewer', 'installer'] as const;
 export type Role = (typeof ROLES)[number];
 

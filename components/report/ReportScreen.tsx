@@ -7,13 +7,14 @@ import { FailureUnits } from '@/components/report/FailureUnits';
 import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
 import { LoginPlanCard } from '@/components/report/LoginPlanCard';
+import { MaintenanceView } from '@/components/report/MaintenanceView';
 import { SecretsCard } from '@/components/report/SecretsCard';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
 import { WhatIfPanel } from '@/components/report/WhatIfPanel';
-import { useDesign } from '@/lib/api/designs';
-import { useVersion, useVersionReport } from '@/lib/api/versions';
+import { useReportPage, useVersionAfterOne } from '@/lib/api/versions';
+import { exposureOf } from '@/lib/report/maintenance';
 import { designHref } from '@/lib/designs/links';
 import { installPrintStyles, printHidden, printPage } from '@/lib/print';
 import { createNamer } from '@/lib/report/names';
@@ -27,10 +28,11 @@ import { indexTopology } from '@/shared/topology';
  * simulated report and says so.
  */
 export function ReportScreen({ id, n }: { id: number; n: number }) {
-  const version = useVersion(id, n);
-  const saved = useVersionReport(id, n);
-  const design = useDesign(id);
-  const doc = version.data?.document;
+  // One request for the design, the version and its stored report (GET …/report-page).
+  const page = useReportPage(id, n);
+  const version = page.data?.version;
+  const doc = version?.document;
+  const afterOne = useVersionAfterOne(id, n);
   const whatIf = useWhatIf(doc);
   const lookups = useMemo(() => {
     if (!doc) return null;
@@ -39,8 +41,8 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
   }, [doc]);
   useEffect(installPrintStyles, []);
 
-  const name = design.data?.design.name ?? doc?.name ?? 'Design';
-  const baseline = saved.data;
+  const name = page.data?.design.name ?? doc?.name ?? 'Design';
+  const baseline = page.data;
   const shown = whatIf.simulated ?? baseline ?? null;
   const failedNames = lookups ? whatIf.settled.map(lookups.namer.unit) : [];
   const { width } = useWindowDimensions();
@@ -58,10 +60,9 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
       </View>
       <View style={styles.title}>
         <Heading level={1}>{`Failure report: ${name}, version ${n}`}</Heading>
-        {version.data ? <Text variant="small" color="inkMuted">{version.data.message}</Text> : null}
+        {version ? <Text variant="small" color="inkMuted">{version.message}</Text> : null}
       </View>
-      <QueryStatus query={version} what={`Version ${n}`} testID="report-version-error" />
-      <QueryStatus query={saved} what="The report" testID="report-error" />
+      <QueryStatus query={page} what={`Version ${n}`} testID="report-version-error" />
       {shown && lookups && baseline ? (
         <>
           <ReportHeadline summary={shown.summary} simulatedWith={whatIf.simulated ? failedNames : null} />
@@ -74,6 +75,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
                   rows={rows}
                   namer={lookups.namer}
                   pending={whatIf.pending}
+                  exposed={exposureOf(whatIf.simulated.report)}
                   onReset={() => whatIf.setFailed([])}
                 />
               ) : null}
@@ -81,6 +83,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
             <View style={wide ? styles.main : styles.stack}>
               <HostAccess rows={rows} unreached={unreached} namer={lookups.namer} index={lookups.index} />
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
+              <MaintenanceView afterOne={afterOne.data} loading={afterOne.isLoading} baseline={baseline.report} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
               <LoginPlanCard id={id} n={n} />
               <View {...printHidden()}>

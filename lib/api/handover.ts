@@ -4,7 +4,7 @@ import { api } from '@/lib/api/client';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useSessionPending } from '@/lib/api/session-gate';
 
-/** The handover routes of a version (api.md). A version never changes, so neither does its plan. */
+/** The handover routes of a version (docs/api.md). A version never changes, so neither does its plan. */
 export const handoverKeys = {
   loginPlan: (id: number, n: number) => [...designKeys.version(id, n), 'login-plan'] as const,
 };

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { DiffResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
+import type { AfterOneResponse, DiffResponse, ReportPageResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
 import { api, isApiRequestError } from '@/lib/api/client';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useSessionPending } from '@/lib/api/session-gate';
@@ -23,6 +23,38 @@ export function useVersionReport(id: number, n: number) {
     queryFn: () => api.get<ReportResponse>(`/api/designs/${id}/versions/${n}/report`),
     staleTime: VERSION_STALE_MS,
     enabled: !pending,
+  });
+}
+
+/**
+ * The report screen's data in one request (design, version with its document, report). The version
+ * and its report also go into their own caches, so the version screen opened next asks for nothing.
+ */
+export function useReportPage(id: number, n: number) {
+  const pending = useSessionPending();
+  const queryClient = useQueryClient();
+  return useQuery({
+    queryKey: designKeys.reportPage(id, n),
+    queryFn: async () => {
+      const page = await api.get<ReportPageResponse>(`/api/designs/${id}/versions/${n}/report-page`);
+      queryClient.setQueryData<VersionResponse>(designKeys.version(id, n), { version: page.version });
+      queryClient.setQueryData<ReportResponse>(designKeys.report(id, n), { report: page.report, summary: page.summary });
+      return page;
+    },
+    staleTime: VERSION_STALE_MS,
+    enabled: !pending,
+  });
+}
+
+/** For each unit not owned by one host, what taking it down cuts off and leaves exposed (stored with the version). */
+export function useVersionAfterOne(id: number, n: number, options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
+  return useQuery({
+    queryKey: designKeys.afterOne(id, n),
+    queryFn: () => api.get<AfterOneResponse>(`/api/designs/${id}/versions/${n}/after-one`),
+    select: (data) => data.afterOneFailure,
+    staleTime: VERSION_STALE_MS,
+    enabled: !pending && (options.enabled ?? true),
   });
 }
 

@@ -1,4 +1,5 @@
 import { fork, type ChildProcess } from 'node:child_process';
+import { getPriority, setPriority } from 'node:os';
 import path from 'node:path';
 
 /**
@@ -71,6 +72,7 @@ export function createPool(options: PoolOptions): Pool {
       serialization: 'advanced',
       stdio: ['ignore', 'ignore', 'pipe', 'ipc'],
     });
+    lowerPriority(child);
     const slot: Slot = { child, ready: false, retiring: false, job: null, timer: null, timedOut: false, stderr: '' };
     slots.add(slot);
     child.stderr?.setEncoding('utf8');
@@ -181,6 +183,21 @@ export function createPool(options: PoolOptions): Pool {
       await Promise.all(exits);
     },
   };
+}
+
+/**
+ * Analysis processes run at a lower scheduling priority (nice 10) than the server: on a busy
+ * machine the request thread gets the CPU first, so a large save never slows everyone's reads,
+ * while an idle core still goes to the analysis. Where the priority cannot be set, nothing changes.
+ */
+const ANALYSIS_NICE = 10;
+function lowerPriority(child: ChildProcess): void {
+  if (child.pid === undefined) return;
+  try {
+    setPriority(child.pid, Math.min(19, getPriority(child.pid) + ANALYSIS_NICE));
+  } catch {
+    // Not permitted here (or the process already ended): it runs at the server's priority.
+  }
 }
 
 /** An idle child must not keep this process alive; a busy one must, or a script awaiting it would exit. */

@@ -43,3 +43,9 @@ export function replyJsonText<T>(res: Response, result: Result<T>, status: numbe
   const fields = Object.entries(parts(result.value)).map(([key, json]) => `${JSON.stringify(key)}:${json}`);
   res.status(status).type('application/json').send(`{${fields.join(',')}}`);
 }
+
+/** Send a success whose whole body is already JSON text. */
+export function replyRawJson(res: Response, result: Result<string>, status: number): void {
+  if (!result.ok) return reply(res, result, status);
+  res.status(status).type('application/json').send(result.value);
+}

@@ -7,6 +7,19 @@ import express, { type Router } from 'express';
  * not under /api gets index.html, and the client router takes over. Hashed bundles are cached for a
  * year; index.html never, so a new build is picked up on the next load.
  */
+const IMMUTABLE = 'public, max-age=31536000, immutable';
+/** A content hash in a file name, as the export writes them: `entry-0f3c….js`, `Inter_400Regular.9a1b….ttf`. */
+const HASHED_NAME = /[.-][0-9a-f]{16,}\.[a-z0-9]+$/i;
+
+/**
+ * Files whose name changes whenever their content does, so a browser may keep them for a year
+ * without asking again (RFC 8246 `immutable`): everything under `_expo/static/` and any file named
+ * by its content hash. The page and every other file are `no-cache`: kept, but checked each time.
+ */
+export function isHashedAsset(file: string): boolean {
+  return file.includes(`${path.sep}_expo${path.sep}static${path.sep}`) || HASHED_NAME.test(path.basename(file));
+}
+
 export function webApp(webDir: string): Router {
   const router = express.Router();
   const index = path.join(webDir, 'index.html');
@@ -21,8 +34,7 @@ export function webApp(webDir: string): Router {
       index: false,
       dotfiles: 'ignore',
       setHeaders(res, file) {
-        const immutable = file.includes(`${path.sep}_expo${path.sep}static${path.sep}`);
-        res.setHeader('Cache-Control', immutable ? 'public, max-age=31536000, immutable' : 'no-cache');
+        res.setHeader('Cache-Control', isHashedAsset(file) ? IMMUTABLE : 'no-cache');
       },
     }),
   );

@@ -1,7 +1,7 @@
 import { DataTypes, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Model, type ModelStatic, type Sequelize } from 'sequelize';
 import { refuseChanges } from './design-version';
 
-/** CHAP secrets, sealed (migration 0011): `sealed` is AES-256-GCM ciphertext, never the secret. */
+/** CHAP secrets, sealed (migration 0012): `sealed` is AES-256-GCM ciphertext, never the secret. */
 export type SecretDirection = 'initiator' | 'target';
 
 export interface ChapSecretRow extends Model<InferAttributes<ChapSecretRow>, InferCreationAttributes<ChapSecretRow>> {

@@ -7,7 +7,7 @@ import { validate } from '@/server/middleware/validate';
 import type { Services } from '@/server/services';
 
 /**
- * /api/designs/:id/versions/:n — the build sheet (api.md): the cable schedule as JSON, `cables.csv`,
+ * /api/designs/:id/versions/:n — the build sheet (docs/api.md): the cable schedule as JSON, `cables.csv`,
  * `addresses.csv`, the workbook `cables.xlsx` and the hosts' `login-plan`. Read access as for the version itself: every role,
  * installers approved versions only, another team 404.
  */

@@ -4,11 +4,11 @@ import type { ReportSummary } from '@/shared/analysis/summary';
 import { labelHistoryData, type LabelHistory } from '@/shared/labels';
 import { PoolLimitError, sharedPool, type Pool } from '@/server/analysis/pool';
 import * as tasks from '@/server/analysis/tasks';
-import type { PreparedText, TaskOutcome } from '@/server/analysis/tasks';
+import type { PreparedText, SaveFields, TaskOutcome } from '@/server/analysis/tasks';
 import type { Config } from '@/server/config';
 import { fail, invalid, ok, type Failure, type Result } from './result';
 
-export type { PreparedText };
+export type { PreparedText, SaveFields };
 export type StoredReport = { summary: ReportSummary; reportJson: string };
 
 /**
@@ -23,6 +23,17 @@ export type Analysis = {
   /** The same for a document that is already JSON text (a stored version being restored). */
   prepareJson(documentJson: string, labels?: LabelHistory): Promise<Result<PreparedText>>;
   report(documentJson: string): Promise<Result<StoredReport>>;
+  /** afterOneFailure (docs/api.md `--after-one`) of a stored document, as JSON text. */
+  afterOne(documentJson: string): Promise<Result<{ afterOneJson: string }>>;
+  /**
+   * A save's whole body as the JSON text that came over the wire: parsed, its fields checked, its
+   * document validated and analysed, in one task. 400s come back as the validate middleware's would.
+   */
+  prepareSave(bodyText: string, labels?: LabelHistory): Promise<Result<{ fields: SaveFields; prepared: PreparedText }>>;
+  /** A stored document as format 2 JSON text (a format 1 version upgraded). */
+  storedDocument(documentJson: string): Promise<Result<string>>;
+  /** The diff of two stored documents, as JSON text. */
+  diff(before: string, after: string): Promise<Result<string>>;
 };
 
 const TASKS_MODULE = path.join(__dirname, '..', 'analysis', 'tasks.ts');
@@ -41,6 +52,17 @@ export function poolAnalysis(limits: Config['analysis']): Analysis {
     prepare: (document, labels) => runTask(pool, limits, 'prepare', prepareInput(JSON.stringify(document), labels), 'it was not saved'),
     prepareJson: (documentJson, labels) => runTask(pool, limits, 'prepare', prepareInput(documentJson, labels), 'it was not saved'),
     report: (documentJson) => runTask(pool, limits, 'report', documentJson, 'its report cannot be shown'),
+    afterOne: (documentJson) => runTask(pool, limits, 'after-one', documentJson, 'its after-one-failure analysis cannot be shown'),
+    prepareSave: async (bodyText, labels) => {
+      try {
+        return saveOutcome(await pool.run<tasks.SaveOutcome>('prepareSave', saveInput(bodyText, labels)));
+      } catch (error) {
+        if (error instanceof PoolLimitError) return limitFailure(error, limits, 'it was not saved');
+        throw error;
+      }
+    },
+    storedDocument: (documentJson) => runTask(pool, limits, 'storedDocument', documentJson, 'it cannot be shown'),
+    diff: (before, after) => runTask(pool, limits, 'diff', { before, after }, 'the comparison cannot be shown'),
   };
 }
 
@@ -53,7 +75,22 @@ export function inProcessAnalysis(): Analysis {
     prepare: async (document, labels) => outcome(tasks.prepare(prepareInput(JSON.stringify(document), labels)), 'it was not saved'),
     prepareJson: async (documentJson, labels) => outcome(tasks.prepare(prepareInput(documentJson, labels)), 'it was not saved'),
     report: async (documentJson) => outcome(tasks.report(documentJson), 'its report cannot be shown'),
+    afterOne: async (documentJson) => outcome(tasks.afterOne(documentJson), 'its after-one-failure analysis cannot be shown'),
+    prepareSave: async (bodyText, labels) => saveOutcome(tasks.prepareSave(saveInput(bodyText, labels))),
+    storedDocument: async (documentJson) => outcome(tasks.storedDocument(documentJson), 'it cannot be shown'),
+    diff: async (before, after) => outcome(tasks.diff({ before, after }), 'the comparison cannot be shown'),
   };
+}
+
+function saveInput(bodyText: string, labels: LabelHistory | undefined): tasks.SaveInput {
+  return labels ? { bodyText, labels: labelHistoryData(labels) } : { bodyText };
+}
+
+function saveOutcome(result: tasks.SaveOutcome): Result<{ fields: SaveFields; prepared: PreparedText }> {
+  if (!result.ok && 'malformed' in result) return fail('invalid', result.malformed);
+  // The body's own fields: bare paths, exactly as the validate middleware answers them.
+  if (!result.ok && 'bodyIssues' in result) return invalid(result.bodyIssues);
+  return outcome(result, 'it was not saved');
 }
 
 function prepareInput(documentJson: string, labels: LabelHistory | undefined): tasks.PrepareInput {

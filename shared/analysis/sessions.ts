@@ -3,7 +3,7 @@ import type { PortRef } from '@/shared/topology/index';
 
 /**
  * Session counts: sessions(h, a) is the number of (host data port, controller data port) pairs of
- * host h and array a that a data path joins and whose networks pair (resilience-analysis.md).
+ * host h and array a that a data path joins and whose networks pair (docs/analysis.md).
  *
  * Data paths only ever run through data and shared switches, so two ports are joined exactly when
  * they are cabled to each other (direct attach) or cabled into the same cluster of switches joined

@@ -6,7 +6,7 @@ import type { Topology } from '../topology/schema';
 import { cleanText } from '../text/clean';
 
 /**
- * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
+ * Bodies, params and answers of the designs and versions routes (docs/api.md). The document itself is
  * checked by `validateTopology` (shared/topology/validate.ts), which reports every problem with its
  * path; here it is only required to be present, so that its issues come out with `document.` paths.
  */
@@ -149,6 +149,14 @@ export type CreateDesignResponse = { design: DesignDto; version: VersionSummary 
 export type VersionResponse = { version: VersionDetail };
 export type SaveVersionResponse = { version: VersionSummary };
 export type ReportResponse = { report: Report; summary: ReportSummary };
+/**
+ * GET …/versions/:n/report-page — what the report screen shows, in one answer: the design (as in
+ * DesignResponse), the version with its document (as in VersionResponse), and its report and summary
+ * (as in ReportResponse).
+ */
+export type ReportPageResponse = ReportResponse & { design: DesignDto; version: VersionDetail };
+/** GET …/versions/:n/after-one (api.md `--after-one`). */
+export type AfterOneResponse = { afterOneFailure: NonNullable<Report['afterOneFailure']> };
 export type ReviewResponse = { review: VersionReview; design: DesignDto };
 /** GET …/versions/:n/diff?against=m — what changed going from version m (before) to version n (after). */
 export type DiffResponse = { diff: TopologyDiff };

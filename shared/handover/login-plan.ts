@@ -6,7 +6,7 @@ import { LIMITS } from '@/shared/rules/limits';
 import type { ArrayDevice, Controller, HostDevice, Topology } from '@/shared/topology/schema';
 
 /**
- * The login plan of a design (api.md `login-plan`): for each host, each data port with its address
+ * The login plan of a design (docs/api.md `login-plan`): for each host, each data port with its address
  * and network, and the target portals and target names that port logs in to. It is read straight
  * from the analysis's own session pairing (`sessionPairs`, the pairs `countSessions` counts), so a
  * host's `expectedSessions` is the report's session count for that host, summed over its arrays.

@@ -1,4 +1,5 @@
 import { fork } from 'node:child_process';
+import { getPriority } from 'node:os';
 import path from 'node:path';
 import { createPool, PoolLimitError, type Pool } from '@/server/analysis/pool';
 
@@ -36,6 +37,12 @@ function alive(pid: number): boolean {
 }
 
 describe('the analysis process pool', () => {
+  it('runs its processes at a lower priority than the server, so requests get the CPU first', async () => {
+    const { pid } = await make().run<Echo>('echo', 1);
+    // POSIX nice values: higher is lower priority, at most 19 (common practice: background work at nice 10).
+    expect(getPriority(pid)).toBe(Math.min(19, getPriority() + 10));
+  });
+
   it('runs a task in another process and answers its result', async () => {
     const result = await make().run<Echo>('echo', { ids: ['constructor', '__proto__'] });
     expect(result.echoed).toEqual({ ids: ['constructor', '__proto__'] });

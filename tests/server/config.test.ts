@@ -14,7 +14,7 @@ function problems(env: Record<string, string>): string[] {
 }
 
 describe('server configuration from the environment', () => {
-  it('uses the api.md defaults outside production', () => {
+  it('uses the docs/api.md defaults outside production', () => {
     const config = loadConfig({});
     expect(config.port).toBe(8080);
     expect(config.databasePath).toBe('data/cablewright.sqlite');

@@ -3,7 +3,7 @@ import { makeTestApp, signInAs, type Agent, type DemoWho, type TestApp } from '.
 import { designId } from './helpers/designs';
 
 /**
- * GET /api/designs/:id/versions/:n/login-plan (api.md) on the seeded demo: Harbor Road v1 (changes
+ * GET /api/designs/:id/versions/:n/login-plan (docs/api.md) on the seeded demo: Harbor Road v1 (changes
  * asked) and v2 (approved), Tidewater's; Sam is on another team.
  */
 let t: TestApp;

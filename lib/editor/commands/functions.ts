@@ -8,3 +8,4 @@ export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layo
 export { applyPattern } from '@/lib/editor/commands/patterns';
 export { deleteItems } from '@/lib/editor/commands/selection';
 export { assignNetwork, bulkAssignNetwork } from '@/lib/editor/commands/assign-network';
+export { addFeed, removeFeed, setPsus } from '@/lib/editor/commands/power';

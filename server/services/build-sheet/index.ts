@@ -9,7 +9,7 @@ import { openVersionDocument } from './read';
 import { buildWorkbook, WorkbookTooSlowError } from './xlsx-pool';
 
 /**
- * The build sheet of a version (api.md): the cable schedule as JSON, the cable list and the address
+ * The build sheet of a version (docs/api.md): the cable schedule as JSON, the cable list and the address
  * worksheet as CSV, and all three tables (Cables, Addresses, Materials) as a workbook. Everyone who
  * may read the version may read these.
  *

@@ -19,10 +19,11 @@ const get = api.get as jest.Mock;
 function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
   const report = analyze(doc);
   get.mockImplementation(async (path: string) => {
-    if (path === `/api/designs/1/versions/${n}`) return { version: versionDetail({ number: n, doc }) };
-    if (path === `/api/designs/1/versions/${n}/report`) return { report, summary: summarize(report, doc) };
+    if (path === `/api/designs/1/versions/${n}/report-page`) {
+      return { design: designResponse([versionSummary({ number: n, doc })]).design, version: versionDetail({ number: n, doc }), report, summary: summarize(report, doc) };
+    }
     if (path === `/api/designs/1/versions/${n}/login-plan`) return loginPlan(doc);
-    if (path === '/api/designs/1') return designResponse([versionSummary({ number: n, doc })]);
+    if (path === `/api/designs/1/versions/${n}/after-one`) return { afterOneFailure: analyze(doc, { afterOne: true }).afterOneFailure };
     throw new Error(`unexpected request ${path}`);
   });
   return { doc, report };
@@ -58,9 +59,12 @@ describe('failure report', () => {
     expect(within(headline).getByTestId('report-headline-errors-value')).toHaveTextContent(String(summary.errors));
     expect(within(headline).getByTestId('report-headline-warnings-value')).toHaveTextContent(String(summary.warnings));
     expect(within(headline).getByTestId('report-headline-spof-value')).toHaveTextContent(String(summary.singlePointsOfFailure));
-    // product.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
+    // docs/demo.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
     expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
     expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
+    // The screen's data comes in one request, not one each for the design, the version and the report;
+    // the after-one analysis (megabytes on a large design) comes on its own for the maintenance view.
+    expect(get.mock.calls.map((c) => c[0]).sort()).toEqual(['/api/designs/1/versions/1/after-one', '/api/designs/1/versions/1/report-page']);
   });
 
   it("names cam-rec-2's single points of failure by device and port in version 1", async () => {
@@ -70,7 +74,7 @@ describe('failure report', () => {
     expect(expected.length).toBeGreaterThan(0);
     const namer = createNamer(doc);
     for (const unit of expected) expect(row).toHaveTextContent(namer.unit(unit), { exact: false });
-    // product.md: cam-rec-2 is cabled only to fab-a, through its first card.
+    // docs/demo.md: cam-rec-2 is cabled only to fab-a, through its first card.
     expect(row).toHaveTextContent(/switch fab-a/);
     expect(row).toHaveTextContent(/card-1 of cam-rec-2/);
     expect(row).toHaveTextContent(/cable HR-A-10 \(cam-rec-2 card-1 p1 → fab-a p\d+\)/);
@@ -100,7 +104,7 @@ describe('failure report', () => {
     fireEvent.press(screen.getByTestId('whatif-add-fab-a'));
     const impact = await screen.findByTestId('whatif-impact', {}, { timeout: 2000 });
     const lost = cutOffBy(doc, ['fab-a']);
-    expect(lost).toEqual(['cam-rec-2']); // product.md: cam-rec-2 hangs on fab-a alone
+    expect(lost).toEqual(['cam-rec-2']); // docs/demo.md: cam-rec-2 hangs on fab-a alone
     for (const host of lost) expect(within(impact).getByTestId(`whatif-lost-${host}`)).toHaveTextContent(`${host} would lose access to vault-1`);
     expect(screen.getByTestId('report-host-cam-rec-2-lost')).toHaveTextContent('Would lose access');
     const simulated = summarize(analyze(doc, { failed: ['fab-a'] }), doc);

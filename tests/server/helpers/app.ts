@@ -41,7 +41,7 @@ export const PRODUCTION_ENV: Record<string, string> = {
 };
 export const PRODUCTION_ORIGIN = 'https://cablewright.example';
 
-/** The demo people by the role the tests sign in as (product.md's Tidewater team, plus Quayside's Sam). */
+/** The demo people by the role the tests sign in as (docs/demo.md's Tidewater team, plus Quayside's Sam). */
 export const DEMO = {
   admin: 'maya@tidewater.example',
   designer: 'ravi@tidewater.example',

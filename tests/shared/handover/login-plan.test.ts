@@ -59,7 +59,7 @@ describe('login plan of the Harbor Road demo, version 2', () => {
       const pairs = host.ports.flatMap((p) => p.targets.map((t) => tupleKey([p.port, t.portal ?? ''])));
       expect(new Set(pairs).size).toBe(pairs.length);
       for (const portal of portals) {
-        // iSCSI's IANA-registered TCP port is 3260 — RFC 7143 §15 (check-values.md).
+        // iSCSI's IANA-registered TCP port is 3260 — RFC 7143 §15 (docs/trade-values.md).
         expect(portal).toMatch(/^\d{1,3}(\.\d{1,3}){3}:3260$/);
       }
     }
