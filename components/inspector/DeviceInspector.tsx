@@ -10,6 +10,7 @@ import { ChipPicker } from '@/components/inspector/ChipPicker';
 import { CommitField } from '@/components/inspector/CommitField';
 import { FindingsAbout } from '@/components/inspector/FindingsAbout';
 import { HostPaths } from '@/components/inspector/HostPaths';
+import { BulkNetworkPicker } from '@/components/inspector/BulkNetworkPicker';
 import { PartList } from '@/components/inspector/PartList';
 import { runEdit } from '@/components/inspector/run';
 
@@ -61,6 +62,16 @@ export function DeviceInspector({ device, doc, readOnly }: Props) {
           disabled={readOnly}
           testID="inspector-switch-role"
           onChange={(role) => runEdit('setDevice', { id: device.id, role })}
+        />
+      ) : null}
+      {device.kind === 'switch' && !readOnly ? (
+        <BulkNetworkPicker
+          doc={doc}
+          testID="inspector-bulk-network"
+          scopes={[
+            { label: 'Cabled to this switch', scope: { kind: 'switch', id: device.id } },
+            { label: 'Its whole fabric', scope: { kind: 'fabric', id: device.id } },
+          ]}
         />
       ) : null}
       {device.kind === 'host' ? (

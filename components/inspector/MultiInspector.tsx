@@ -4,6 +4,7 @@ import type { Topology } from '@/shared/topology/schema';
 import { subjectLabel } from '@/lib/editor/describe';
 import { editorStore } from '@/lib/editor/store';
 import { runEdit } from '@/components/inspector/run';
+import { BulkNetworkPicker } from '@/components/inspector/BulkNetworkPicker';
 
 /** Several things selected: what they are, and deleting them in one step. */
 export function MultiInspector({ ids, doc, readOnly }: { ids: string[]; doc: Topology; readOnly: boolean }) {
@@ -18,6 +19,7 @@ export function MultiInspector({ ids, doc, readOnly }: { ids: string[]; doc: Top
         ))}
         {ids.length > shown.length ? <Text variant="small" color="inkMuted">{`…and ${ids.length - shown.length} more`}</Text> : null}
       </View>
+      {!readOnly ? <BulkNetworkPicker doc={doc} testID="inspector-bulk-network" scopes={[{ label: 'The selection', scope: { kind: 'selection', ids } }]} /> : null}
       {!readOnly ? (
         <Button
           label={`Delete all ${ids.length}`}

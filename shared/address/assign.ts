@@ -6,7 +6,20 @@ import { parseCidr, usableRange } from '@/shared/address/cidr';
  * counting up from the first usable one, never the network, broadcast or subnet-router anycast
  * address, the gateway, a reserved address or one already used.
  */
-export type AssignOptions = { gateway?: string; reserved?: readonly string[] };
+export type AssignOptions = {
+  gateway?: string;
+  reserved?: readonly string[];
+  /**
+   * `low` (the default): lowest free first. `high`: the block's high half — hosts by the usual
+   * convention, above the targets (common practice) — counting up from the middle of the first
+   * 256 usable addresses (of the whole block when smaller), then, when that runs out, down from
+   * just below the middle.
+   */
+  from?: 'low' | 'high';
+};
+
+/** Where the high half starts: the middle of the first 256 usable addresses, or of a smaller block. */
+export const HIGH_BLOCK_WINDOW = BigInt(256);
 
 function takenSet(cidrFamily: string, texts: readonly (string | undefined)[]): Set<bigint> {
   const taken = new Set<bigint>();
@@ -33,11 +46,20 @@ export function assignAddresses(
   const taken = takenSet(block.family, [...used, options.gateway, ...(options.reserved ?? [])]);
   const range = usableRange(block);
   const result: string[] = [];
-  // Each taken address costs at most one extra step, so this ends after count + |taken| steps.
-  for (let value = range.first; value <= range.last && result.length < count; value += BigInt(1)) {
-    if (taken.has(value)) continue;
-    result.push(formatIp({ family: block.family, value }));
+  const one = BigInt(1);
+  const take = (value: bigint) => {
+    if (!taken.has(value)) result.push(formatIp({ family: block.family, value }));
+  };
+  if (options.from === 'high') {
+    const size = range.last - range.first + one;
+    const window = size < HIGH_BLOCK_WINDOW ? size : HIGH_BLOCK_WINDOW;
+    const middle = range.first + window / BigInt(2);
+    for (let value = middle; value <= range.last && result.length < count; value += one) take(value);
+    for (let value = middle - one; value >= range.first && result.length < count; value -= one) take(value);
+    return result;
   }
+  // Each taken address costs at most one extra step, so this ends after count + |taken| steps.
+  for (let value = range.first; value <= range.last && result.length < count; value += one) take(value);
   return result;
 }
 

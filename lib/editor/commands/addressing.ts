@@ -7,8 +7,10 @@ import { CommandError } from '@/lib/editor/errors';
 
 /**
  * Automatic addressing. Every host and controller port that is on a network and has no address
- * gets a static one from its network: the lowest free host address, ports taken in document order
- * and networks in list order, so the same design always gets the same plan. The address math is
+ * gets a static one from its network: targets (controller ports) the lowest free addresses, hosts
+ * a high block (from the middle of the first 256 usable addresses up; the usual convention, common
+ * practice), ports taken in document order and networks in list order, so the same design always
+ * gets the same plan. The address math is
  * the shared one (shared/address): it never hands out the network or broadcast address, the
  * gateway, or an address any port of the design already has. A network that runs out leaves the
  * remaining ports unaddressed, which the analysis reports.
@@ -41,7 +43,7 @@ export function planAddresses(doc: Topology, args: AutoAssignArgs = {}): Map<str
   checkNetworks(doc, args.networkIds);
   const networks = args.networkIds ? new Set(args.networkIds) : null;
   const only = args.portIds ? new Set(args.portIds) : null;
-  const waiting = new Map<string, string[]>();
+  const waiting = new Map<string, { targets: string[]; hosts: string[] }>();
   for (const device of doc.devices) {
     if (device.kind === 'switch') continue;
     const groups = device.kind === 'array' ? device.controllers : device.adapters;
@@ -49,22 +51,24 @@ export function planAddresses(doc: Topology, args: AutoAssignArgs = {}): Map<str
       for (const port of group.ports) {
         if (!port.networkId || port.address !== undefined) continue;
         if ((networks && !networks.has(port.networkId)) || (only && !only.has(port.id))) continue;
-        const list = waiting.get(port.networkId);
-        if (list) list.push(port.id);
-        else waiting.set(port.networkId, [port.id]);
+        let lists = waiting.get(port.networkId);
+        if (!lists) waiting.set(port.networkId, (lists = { targets: [], hosts: [] }));
+        (device.kind === 'array' ? lists.targets : lists.hosts).push(port.id);
       }
     }
   }
   const used = staticAddresses(doc);
   const plan = new Map<string, string>();
   for (const network of doc.networks) {
-    const ports = waiting.get(network.id);
-    if (!ports) continue;
-    const ips = assignAddresses(network.cidr, ports.length, used, { gateway: network.gateway });
-    ips.forEach((ip, i) => {
-      plan.set(ports[i], ip);
-      used.push(ip);
-    });
+    const lists = waiting.get(network.id);
+    if (!lists) continue;
+    for (const [ports, from] of [[lists.targets, 'low'], [lists.hosts, 'high']] as const) {
+      const ips = assignAddresses(network.cidr, ports.length, used, { gateway: network.gateway, from });
+      ips.forEach((ip, i) => {
+        plan.set(ports[i], ip);
+        used.push(ip);
+      });
+    }
   }
   return plan;
 }

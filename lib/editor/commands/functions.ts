@@ -7,6 +7,6 @@ export { autoAssignAddresses, clearAddresses } from '@/lib/editor/commands/addre
 export { autoArrange, moveDevice, moveDevices } from '@/lib/editor/commands/layout';
 export { applyPattern } from '@/lib/editor/commands/patterns';
 export { deleteItems } from '@/lib/editor/commands/selection';
-export { assignNetwork } from '@/lib/editor/commands/assign-network';
+export { assignNetwork, bulkAssignNetwork } from '@/lib/editor/commands/assign-network';
 export { addFeed, removeFeed, setPsus } from '@/lib/editor/commands/power';
 export { importHosts } from '@/lib/editor/commands/import';

@@ -48,6 +48,6 @@ export type { AddAdapterArgs, AddControllerArgs, AddPortArgs, SetPortArgs } from
 export { plannedCable, suggestMedia, type CablePortsArgs, type SetCableArgs } from '@/lib/editor/commands/cabling';
 export { plannedNetworkId, type AddNetworkArgs, type UpdateNetworkArgs } from '@/lib/editor/commands/networks';
 export { planAddresses, type AutoAssignArgs } from '@/lib/editor/commands/addressing';
-export type { AssignNetworkArgs } from '@/lib/editor/commands/assign-network';
+export { portsInScope, type AssignNetworkArgs, type BulkAssignArgs, type PortScope } from '@/lib/editor/commands/assign-network';
 export { freeSpot, type MoveDeviceArgs, type MoveDevicesArgs } from '@/lib/editor/commands/layout';
 export { PATTERN_IDS, type ApplyPatternArgs, type PatternId } from '@/lib/editor/commands/patterns';

@@ -4,6 +4,7 @@ import { describeId } from '@/lib/editor/describe';
 import { analyseNow, liveAnalysisStore } from '@/lib/editor/live-analysis';
 import { editorStore } from '@/lib/editor/store';
 import { Inspector } from '@/components/inspector/Inspector';
+import { portsInScope } from '@/lib/editor/commands';
 
 function open(readOnly = false) {
   editorStore.getState().load(harborRoadV2(), { designId: 1, baseVersion: 2, readOnly });
@@ -65,6 +66,22 @@ describe('the inspector', () => {
     expect(ctl().iqn).toBe('iqn.2026-01.example.tidewater:storage.vault-1.ctl-b');
     act(() => editorStore.getState().undo());
     expect(ctl()).not.toHaveProperty('iqn');
+  });
+
+  it('puts every data port cabled to a switch on a network, with addresses, in one undo step', () => {
+    open();
+    act(() => editorStore.getState().select(['fab-a']));
+    render(<Inspector />);
+    const before = doc();
+    expect(screen.getByTestId('inspector-bulk-network')).toHaveTextContent(/10 data ports/); // 6 hosts + 2 controllers × 2 ports on fabric A
+    fireEvent.press(screen.getByTestId('inspector-bulk-network-network-net-fabric-b'));
+    const moved = portsInScope(doc(), { kind: 'switch', id: 'fab-a' });
+    expect(moved).toHaveLength(10);
+    const ports = new Map(doc().devices.flatMap((d) => (d.kind === 'array' ? d.controllers : d.kind === 'host' ? d.adapters : []).flatMap((g) => g.ports)).map((p) => [p.id, p]));
+    for (const id of moved) expect(ports.get(id)).toMatchObject({ networkId: 'net-fabric-b', address: { mode: 'static' } });
+    expect(screen.getByTestId('inspector-bulk-network-done')).toHaveTextContent('10 data ports put on fabric B.');
+    act(() => editorStore.getState().undo());
+    expect(doc()).toEqual(before);
   });
 
   it('sets the CHAP mode of the design and says the secrets are not stored, with the RFC’s lengths', () => {

@@ -103,9 +103,11 @@ describe('automatic addressing', () => {
     let doc = apply(smallDesign(), 'addNetwork', { name: 'v6', purpose: 'data', cidr: '2001:db8:a::/64', gateway: '2001:db8:a::1' });
     for (const id of ['host-1-card-1-p1', 'host-2-card-1-p1', 'array-1-ctl-a-p1']) doc = apply(doc, 'setPort', { id, networkId: 'net-v6' });
     const next = apply(doc, 'autoAssignAddresses', {});
-    // ::0 is the subnet-router anycast address and ::1 the gateway, so array-1 (first in the document) gets ::2.
+    // ::0 is the subnet-router anycast address and ::1 the gateway, so array-1 (the target) gets ::2;
+    // hosts take the high block, from the middle of the first 256 usable addresses (::1 + 128 = ::81).
     expect(port(next, 'array-1-ctl-a-p1').address).toEqual({ mode: 'static', ip: '2001:db8:a::2' });
-    expect(port(next, 'host-1-card-1-p1').address).toEqual({ mode: 'static', ip: '2001:db8:a::3' });
+    expect(port(next, 'host-1-card-1-p1').address).toEqual({ mode: 'static', ip: '2001:db8:a::81' });
+    expect(port(next, 'host-2-card-1-p1').address).toEqual({ mode: 'static', ip: '2001:db8:a::82' });
     checkPlan(next);
   });
 

@@ -45,9 +45,10 @@ describe('networks', () => {
     const kept = apply(doc, 'updateNetwork', { id: 'net-fabric-a', cidr: '192.0.2.0/24' });
     expect(port(kept, 'host-1-card-1-p1').address).toEqual({ mode: 'static', ip: '198.51.100.21' });
     const moved = apply(doc, 'updateNetwork', { id: 'net-fabric-a', cidr: '192.0.2.0/24', readdress: true });
-    // Renumbered in document order (array-1 first) from the new RFC 5737 block.
+    // Renumbered from the new RFC 5737 block: the target low, hosts from the middle of the /24's 254
+    // usable addresses (.1 + 127 = .128) up — targets low, hosts high (common practice).
     expect(port(moved, 'array-1-ctl-a-p1').address).toEqual({ mode: 'static', ip: '192.0.2.1' });
-    expect(port(moved, 'host-1-card-1-p1').address).toEqual({ mode: 'static', ip: '192.0.2.2' });
+    expect(port(moved, 'host-1-card-1-p1').address).toEqual({ mode: 'static', ip: '192.0.2.128' });
     expect(port(moved, 'host-2-card-1-p1').address).toEqual({ mode: 'dhcp' });
   });
 
