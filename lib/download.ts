@@ -6,7 +6,12 @@ export { jsonFileText, versionFileName } from '@/lib/designs/files';
 /** Hand a JSON file to the browser's download; returns false where there is no browser to do it. */
 export function downloadJson(fileName: string, value: unknown): boolean {
   if (Platform.OS !== 'web' || typeof document === 'undefined') return false;
-  const blob = new Blob([jsonFileText(value)], { type: 'application/json' });
+  return downloadBlob(fileName, new Blob([jsonFileText(value)], { type: 'application/json' }));
+}
+
+/** Hand any file (a CSV or workbook from the server) to the browser's download; false where there is no browser. */
+export function downloadBlob(fileName: string, blob: Blob): boolean {
+  if (Platform.OS !== 'web' || typeof document === 'undefined') return false;
   const url = URL.createObjectURL(blob);
   const link = document.createElement('a');
   link.href = url;

@@ -3,7 +3,7 @@ import { readTopologyText, type ImportResult } from '@/lib/designs/read-document
 
 export { readTopologyText, type ImportResult } from '@/lib/designs/read-document';
 
-/** The server takes documents up to 10 MB (api.md, 413 beyond); say so before uploading anything larger. */
+/** The server takes documents up to 10 MB (docs/api.md, 413 beyond); say so before uploading anything larger. */
 export const MAX_DOCUMENT_BYTES = 10 * 1024 * 1024;
 
 function megabytes(bytes: number): string {

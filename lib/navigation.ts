@@ -1,13 +1,15 @@
 import type { Href } from 'expo-router';
 import { can, type Capability, type Role } from '@/shared/roles';
 
-export type NavKey = 'designs' | 'team' | 'mailbox' | 'account';
+export type NavKey = 'designs' | 'site' | 'team' | 'mailbox' | 'account';
 
 export type NavItem = { key: NavKey; label: string; href: Href; icon: NavKey; capability?: Capability };
 
 /** The signed-in destinations, in the order the tab bar and the sidebar show them. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { key: 'designs', label: 'Designs', href: '/designs', icon: 'designs' },
+  // The installer's home on site: the approved versions to build and their progress.
+  { key: 'site', label: 'Site work', href: '/site', icon: 'site', capability: 'markBuild' },
   { key: 'team', label: 'Team', href: '/team', icon: 'team', capability: 'manageTeam' },
   { key: 'mailbox', label: 'Mailbox', href: '/mailbox', icon: 'mailbox', capability: 'manageTeam' },
   { key: 'account', label: 'Account', href: '/account', icon: 'account' },

@@ -4,7 +4,7 @@ import path from 'node:path';
 import ipaddr from 'ipaddr.js';
 import { z } from 'zod';
 
-/** The server's whole environment (api.md), parsed once at start so a typo fails loudly instead of later. */
+/** The server's whole environment (docs/api.md), parsed once at start so a typo fails loudly instead of later. */
 const envSchema = z.object({
   NODE_ENV: z.string().optional(),
   PORT: z.coerce.number({ error: 'use a port number from 0 to 65535' }).int().min(0).max(65535).default(8080),
@@ -33,6 +33,7 @@ const envSchema = z.object({
   ANALYSIS_MAX_OLD_MB: z.coerce.number({ error: 'use a number of megabytes' }).int().min(32).max(16_384).default(512),
   ANALYSIS_WORKERS: z.coerce.number({ error: 'use a whole number of processes' }).int().min(1).max(32).optional(),
   PHOTOS_DIR: z.string().trim().min(1).optional(),
+  SECRETS_KEY: z.string().trim().optional(),
 });
 
 export type MailConfig = { kind: 'fake' } | { kind: 'smtp'; url: string };
@@ -68,6 +69,15 @@ export type Config = {
    * file. Null with DATABASE_PATH=:memory: and no PHOTOS_DIR: a temporary folder is made on first use.
    */
   photosDir: string | null;
+  /**
+   * The AES-256-GCM key that seals the CHAP secrets (SECRETS_KEY: 64 hex digits or 32 bytes in
+   * base64). Null outside production when it is not set: the key then lives in `secretsKeyFile`,
+   * made on first start, or with DATABASE_PATH=:memory: is random per process
+   * (server/services/secrets/crypto.ts). Production refuses to start without it.
+   */
+  secretsKey: Buffer | null;
+  /** Where the key is kept when SECRETS_KEY is not set: `secrets.key` beside the database file. */
+  secretsKeyFile: string | null;
 };
 
 /** Expo's dev server (npm run dev) calls the API from this origin. */
@@ -120,6 +130,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   if (photosDir && isInside(photosDir, webDir)) {
     problems.push('PHOTOS_DIR: must not be inside the web app folder (WEB_DIR), where it would be served to anyone');
   }
+  const secretsKey = parseSecretsKey(e.SECRETS_KEY, isProduction, problems);
   if (problems.length > 0) throw new ConfigError(problems);
 
   const appUrl = (e.APP_URL ?? `http://localhost:${e.PORT}`).replace(/\/+$/, '');
@@ -140,6 +151,8 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     webDevServer: e.WEB_DEV_SERVER ?? null,
     trustProxy,
     photosDir,
+    secretsKey,
+    secretsKeyFile: secretsKey || e.DATABASE_PATH === ':memory:' ? null : path.resolve(path.dirname(e.DATABASE_PATH), 'secrets.key'),
     analysis: {
       timeoutMs: e.ANALYSIS_TIMEOUT_MS,
       maxOldMb: e.ANALYSIS_MAX_OLD_MB,
@@ -147,6 +160,28 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
       workers: e.ANALYSIS_WORKERS ?? Math.max(1, availableParallelism() - 1),
     },
   };
+}
+
+/** 32 bytes: 64 hex digits, or base64 (44 characters with padding). Required in production. */
+function parseSecretsKey(value: string | undefined, isProduction: boolean, problems: string[]): Buffer | null {
+  if (!value) {
+    if (isProduction) problems.push('SECRETS_KEY: required in production (32 random bytes as 64 hex digits or base64); it seals the CHAP secrets');
+    return null;
+  }
+  const key = parseKeyText(value);
+  if (!key) problems.push('SECRETS_KEY: use 32 random bytes as 64 hex digits or base64, e.g. from `openssl rand -hex 32`');
+  return key;
+}
+
+/** 64 hex digits or base64 of exactly 32 bytes, else null. */
+export function parseKeyText(text: string): Buffer | null {
+  const value = text.trim();
+  if (/^[0-9a-fA-F]{64}$/.test(value)) return Buffer.from(value, 'hex');
+  if (/^[A-Za-z0-9+/]{43}=?$/.test(value)) {
+    const key = Buffer.from(value, 'base64');
+    return key.length === 32 ? key : null;
+  }
+  return null;
 }
 
 const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);

@@ -1,4 +1,4 @@
-/** The four team roles (product brief) and what each may do (api.md role table). */
+/** The four team roles (product brief) and what each may do (docs/api.md role table). */
 export const ROLES = ['admin', 'designer', 'reviewer', 'installer'] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -18,6 +18,9 @@ export const CAPABILITIES = {
   manageTeam: ['admin'],
   /** Site work: mark cables and bring-up steps, attach photos (approved versions only). */
   markBuild: ['admin', 'installer'],
+  /** CHAP secrets: make (or remake) them, and be shown them (each showing recorded). */
+  generateSecrets: ['admin', 'designer'],
+  revealSecrets: ['admin', 'installer'],
 } as const satisfies Record<string, readonly Role[]>;
 export type Capability = keyof typeof CAPABILITIES;
 

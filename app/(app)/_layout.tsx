@@ -2,6 +2,7 @@ import { Slot, usePathname } from 'expo-router';
 import { RouteFrame } from '@/components/shell/RouteFrame';
 import { SessionProblem } from '@/components/shell/SessionStates';
 import { SignedInShell } from '@/components/shell/SignedInShell';
+import { QueueSender } from '@/components/build/QueueSender';
 import { useMe } from '@/lib/api/auth';
 import { SessionPendingContext } from '@/lib/api/session-gate';
 
@@ -13,6 +14,7 @@ export default function AppLayout() {
   if (me.data) {
     return (
       <SignedInShell user={me.data}>
+        <QueueSender />
         <Slot />
       </SignedInShell>
     );

@@ -54,12 +54,12 @@ export function CanvasScene({ width, height, label }: { width: number; height: n
 
   const shown = useMemo(() => (drag ? withMovedDevices(snapshot, drag.moves) : snapshot), [snapshot, drag]);
   const area = cullRect(viewport, { width, height });
-  const drawn = useMemo(() => cull(shown, area), [shown, area.x, area.y, area.width, area.height]); // eslint-disable-line react-hooks/exhaustive-deps
+  const drawn = useMemo(() => cull(shown, area), [shown, area.x, area.y, area.width, area.height]); // narrow deps on purpose
   const detail = viewport.zoom >= DETAIL_ZOOM;
-  const fabrics = useMemo(() => computeFabrics(doc), [doc.devices, doc.cables, doc.networks]); // eslint-disable-line react-hooks/exhaustive-deps
-  const cabled = useMemo(() => cabledByDevice(snapshot), [snapshot.doc.cables, snapshot.parts]); // eslint-disable-line react-hooks/exhaustive-deps
+  const fabrics = useMemo(() => computeFabrics(doc), [doc.devices, doc.cables, doc.networks]); // narrow deps on purpose
+  const cabled = useMemo(() => cabledByDevice(snapshot), [snapshot.doc.cables, snapshot.parts]); // narrow deps on purpose
   const selectionSet = useMemo(() => new Set(selection), [selection]);
-  const parts = useMemo(() => partsByDevice(snapshot, selection), [snapshot.parts, selection]); // eslint-disable-line react-hooks/exhaustive-deps
+  const parts = useMemo(() => partsByDevice(snapshot, selection), [snapshot.parts, selection]); // narrow deps on purpose
   const pendingDevice = pending ? (snapshot.parts.get(pending)?.deviceId ?? null) : null;
 
   const { zoom } = viewport;

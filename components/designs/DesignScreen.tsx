@@ -8,6 +8,7 @@ import { QueryStatus } from '@/components/designs/QueryStatus';
 import { UploadVersion } from '@/components/versions/UploadVersion';
 import { VersionList } from '@/components/versions/VersionList';
 import { VersionPanel } from '@/components/versions/VersionPanel';
+import { DesignBuildProgress } from '@/components/build/DesignBuildProgress';
 import { useMe } from '@/lib/api/auth';
 import { useDesign } from '@/lib/api/designs';
 import { can } from '@/shared/roles';
@@ -45,6 +46,7 @@ export function DesignScreen({ id, selected, onSelect }: DesignScreenProps) {
   return (
     <Screen testID="design-screen" maxWidth={wide ? 1280 : undefined}>
       <DesignHeader design={info} latest={versions[0] ?? null} editor={editor} uploading={uploading} onUpload={() => setUploading(true)} />
+      {info.approvedVersion ? <DesignBuildProgress designId={id} version={info.approvedVersion.number} /> : null}
       {uploading ? (
         <UploadVersion
           designId={id}

@@ -6,7 +6,7 @@ import { useMe } from '@/lib/api/auth';
 import { roleLabel } from '@/lib/format';
 import { can } from '@/shared/roles';
 
-/** Screens that change designs, for designers and admins only (api.md); the server refuses the rest too. */
+/** Screens that change designs, for designers and admins only (docs/api.md); the server refuses the rest too. */
 export function EditorsOnly({ screen, children }: { screen: string; children: ReactNode }) {
   const me = useMe();
   if (!me.data) return <SessionLoading />;

@@ -25,6 +25,16 @@ function iqnSuggestion(doc: Topology, device: Device): string | null {
   return null;
 }
 
+/** A target name for an array from the hosts' prefix: "iqn.2026-01.example.tidewater:storage.vault-1". */
+function targetSuggestion(doc: Topology, device: Device): string | null {
+  for (const other of doc.devices) {
+    if (other.kind !== 'host' || !other.iqn) continue;
+    const colon = other.iqn.indexOf(':');
+    if (other.iqn.startsWith('iqn.') && colon > 0) return `${other.iqn.slice(0, colon)}:storage.${device.name.toLowerCase().replace(/[^a-z0-9.:-]+/g, '-')}`;
+  }
+  return null;
+}
+
 /** The printed name of the rack the device is placed in, or empty. */
 function rackName(doc: Topology, device: Device): string {
   const rackId = device.placement?.rackId;
@@ -33,9 +43,9 @@ function rackName(doc: Topology, device: Device): string {
 
 type Props = { device: Device; doc: Topology; readOnly: boolean };
 
-/** A device: its name, role (switch) or initiator name (host), rack place, parts and findings. */
+/** A device: its name, role (switch), initiator name (host) or target name (array), rack place, parts and findings. */
 export function DeviceInspector({ device, doc, readOnly }: Props) {
-  const iqnNote = device.kind === 'host' ? iqnSuggestion(doc, device) : null;
+  const iqnNote = device.kind === 'host' ? iqnSuggestion(doc, device) : device.kind === 'array' ? targetSuggestion(doc, device) : null;
   const iqnFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'iqn-invalid')?.message ?? null);
   const nameFinding = useStore(liveAnalysisStore, (s) => s.marks.findingsBySubject.get(device.id)?.find((f) => f.rule === 'device-name-duplicate')?.message ?? null);
   const groups = groupsOf(device);
@@ -68,6 +78,23 @@ export function DeviceInspector({ device, doc, readOnly }: Props) {
             onCommit={(iqn) => runEdit('setDevice', { id: device.id, iqn })}
           />
           {!readOnly && !device.iqn && iqnNote ? <Button label={`Use ${iqnNote}`} variant="ghost" size="compact" onPress={() => runEdit('setDevice', { id: device.id, iqn: iqnNote })} testID="inspector-iqn-suggest" /> : null}
+        </View>
+      ) : null}
+      {device.kind === 'array' ? (
+        <View style={styles.group}>
+          <CommitField
+            label="Target name (IQN)"
+            hint="The array's iSCSI target name, by the same rules as initiator names (RFC 7143 §4.2.7). A controller may carry its own instead."
+            value={device.iqn ?? ''}
+            schema={iqnField}
+            advise={iqnAdvice}
+            note={device.iqn ? (iqnFinding ?? iqnAdvice(device.iqn)) : null}
+            readOnly={readOnly}
+            placeholder="iqn.2026-01.example.tidewater:storage.array-name"
+            testID="inspector-target-iqn"
+            onCommit={(iqn) => runEdit('setDevice', { id: device.id, iqn })}
+          />
+          {!readOnly && !device.iqn && iqnNote ? <Button label={`Use ${iqnNote}`} variant="ghost" size="compact" onPress={() => runEdit('setDevice', { id: device.id, iqn: iqnNote })} testID="inspector-target-iqn-suggest" /> : null}
         </View>
       ) : null}
       <View style={styles.row}>

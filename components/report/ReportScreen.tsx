@@ -6,11 +6,15 @@ import { QueryStatus } from '@/components/designs/QueryStatus';
 import { FailureUnits } from '@/components/report/FailureUnits';
 import { FindingsList } from '@/components/report/FindingsList';
 import { HostAccess } from '@/components/report/HostAccess';
+import { LoginPlanCard } from '@/components/report/LoginPlanCard';
+import { MaintenanceView } from '@/components/report/MaintenanceView';
+import { SecretsCard } from '@/components/report/SecretsCard';
 import { ReportHeadline } from '@/components/report/ReportHeadline';
 import { useWhatIf } from '@/components/report/useWhatIf';
 import { WhatIfImpact } from '@/components/report/WhatIfImpact';
 import { WhatIfPanel } from '@/components/report/WhatIfPanel';
-import { useReportPage } from '@/lib/api/versions';
+import { useReportPage, useVersionAfterOne } from '@/lib/api/versions';
+import { exposureOf } from '@/lib/report/maintenance';
 import { designHref } from '@/lib/designs/links';
 import { installPrintStyles, printHidden, printPage } from '@/lib/print';
 import { createNamer } from '@/lib/report/names';
@@ -28,6 +32,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
   const page = useReportPage(id, n);
   const version = page.data?.version;
   const doc = version?.document;
+  const afterOne = useVersionAfterOne(id, n);
   const whatIf = useWhatIf(doc);
   const lookups = useMemo(() => {
     if (!doc) return null;
@@ -70,6 +75,7 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
                   rows={rows}
                   namer={lookups.namer}
                   pending={whatIf.pending}
+                  exposed={exposureOf(whatIf.simulated.report)}
                   onReset={() => whatIf.setFailed([])}
                 />
               ) : null}
@@ -77,7 +83,12 @@ export function ReportScreen({ id, n }: { id: number; n: number }) {
             <View style={wide ? styles.main : styles.stack}>
               <HostAccess rows={rows} unreached={unreached} namer={lookups.namer} index={lookups.index} />
               <FailureUnits failures={shown.report.failures} namer={lookups.namer} />
+              <MaintenanceView afterOne={afterOne.data} loading={afterOne.isLoading} baseline={baseline.report} namer={lookups.namer} />
               <FindingsList findings={shown.report.findings} namer={lookups.namer} />
+              <LoginPlanCard id={id} n={n} />
+              <View {...printHidden()}>
+                <SecretsCard id={id} />
+              </View>
             </View>
           </View>
         </>

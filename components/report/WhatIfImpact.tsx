@@ -2,12 +2,22 @@ import { StyleSheet, View } from 'react-native';
 import { Banner, Button, Icon, Text, space } from '@/components/ui';
 import type { Namer } from '@/lib/report/names';
 import type { HostRow } from '@/lib/report/view';
+import type { ExposedPair } from '@/shared/analysis/types';
+import { tupleKey } from '@/shared/keys/tuple';
 import { printHidden } from '@/lib/print';
 
-type WhatIfImpactProps = { failedNames: readonly string[]; rows: readonly HostRow[]; namer: Namer; pending: boolean; onReset: () => void };
+type WhatIfImpactProps = {
+  failedNames: readonly string[];
+  rows: readonly HostRow[];
+  namer: Namer;
+  pending: boolean;
+  /** Pairs still connected after the chosen failures but hanging on a single point of failure. */
+  exposed?: readonly ExposedPair[];
+  onReset: () => void;
+};
 
 /** The simulation's verdict: which hosts would be cut off and which would keep access with less. */
-export function WhatIfImpact({ failedNames, rows, namer, pending, onReset }: WhatIfImpactProps) {
+export function WhatIfImpact({ failedNames, rows, namer, pending, exposed = [], onReset }: WhatIfImpactProps) {
   const lost = rows.filter((r) => r.effect === 'lost');
   const reduced = rows.filter((r) => r.effect === 'reduced');
   return (
@@ -43,6 +53,16 @@ export function WhatIfImpact({ failedNames, rows, namer, pending, onReset }: Wha
         <Text variant="small" color="warningText" testID="whatif-reduced">
           {`Still connected, but with less to spare: ${reduced.map((r) => namer.device(r.host)).join(', ')}.`}
         </Text>
+      ) : null}
+      {exposed.length > 0 ? (
+        <View style={styles.list} testID="whatif-exposed">
+          <Text variant="smallStrong" color="warningText">One more failure away from losing storage:</Text>
+          {exposed.map((pair) => (
+            <Text key={tupleKey([pair.host, pair.array])} variant="small" color="warningText" testID={`whatif-exposed-${pair.host}`}>
+              {`${namer.device(pair.host)} to ${namer.device(pair.array)}, through ${pair.singlePointsOfFailure.map(namer.unit).join(', ')}`}
+            </Text>
+          ))}
+        </View>
       ) : null}
     </Banner>
   );

@@ -4,7 +4,8 @@ import { colors, type ColorName } from '@/components/ui/tokens';
 
 /** Line icons drawn for Cablewright on a 24-unit grid; decorative, so hidden from assistive tech. */
 export type IconName = 'designs' | 'team' | 'account' | 'mailbox' | 'signOut' | 'info' | 'warning' | 'error' | 'success' | 'chevron' | 'back' | 'lock'
-  | 'tick' | 'search' | 'download' | 'upload' | 'print' | 'compare' | 'unplugged';
+  | 'tick' | 'search' | 'download' | 'upload' | 'print' | 'compare' | 'unplugged'
+  | 'site' | 'camera' | 'undo' | 'clock';
 
 type IconProps = { name: IconName; size?: number; color?: ColorName | string };
 
@@ -128,6 +129,33 @@ const drawings: Record<IconName, (p: Common) => ReactNode> = {
       <Path d="M3 12h5M8 8.5v7M8 10h3M8 14h3" {...p} />
       <Path d="M21 12h-5M16 8.5v7" {...p} />
       <Path d="M12.8 8.8l1 1.4M12.8 15.2l1-1.4" {...p} />
+    </>
+  ),
+  // A rack with a clipboard tick: work on site.
+  site: (p) => (
+    <>
+      <Rect x={4} y={3} width={10} height={18} rx={1.5} {...p} />
+      <Path d="M7 7h4M7 11h4M7 15h4" {...p} />
+      <Path d="M15.5 15.5l2 2 3.5-4" {...p} />
+    </>
+  ),
+  camera: (p) => (
+    <>
+      <Path d="M4 8h3l1.6-2.5h6.8L17 8h3v11H4z" {...p} />
+      <Circle cx={12} cy={13} r={3.4} {...p} />
+    </>
+  ),
+  // A curved arrow turning back: take the last mark back.
+  undo: (p) => (
+    <>
+      <Path d="M8 6.5 4.5 10 8 13.5" {...p} />
+      <Path d="M5 10h9a5 5 0 0 1 0 10h-3" {...p} />
+    </>
+  ),
+  clock: (p) => (
+    <>
+      <Circle cx={12} cy={12} r={9} {...p} />
+      <Path d="M12 7.5V12l3 2" {...p} />
     </>
   ),
 };

@@ -59,6 +59,8 @@ export const contrastPairs: readonly [ColorName, ColorName, number][] = [
   ['onSidebarMuted', 'sidebar', 4.5],
   ['copperSoft', 'sidebar', 4.5],
   ['lineStrong', 'surface', 3],
+  // Site work: the ghost buttons of a safety caution row.
+  ['primary', 'warningSoft', 4.5],
 ];
 
 /** A 4-point spacing scale. */

@@ -10,7 +10,7 @@ import { DownloadButton } from '@/components/versions/DownloadButton';
 import { useDesign } from '@/lib/api/designs';
 import { useVersion } from '@/lib/api/versions';
 import { cableRows, deviceViews, networkRows, type CableRow, type NetworkRow } from '@/lib/designs/document-view';
-import { designHref, reportHref } from '@/lib/designs/links';
+import { designHref, reportHref, scheduleHref } from '@/lib/designs/links';
 import { formatDateTime } from '@/lib/format';
 import { indexTopology } from '@/shared/topology';
 
@@ -65,6 +65,9 @@ export function VersionScreen({ id, n }: { id: number; n: number }) {
             <Link href={reportHref(id, n)} asChild>
               <Button label="Failure report" size="compact" testID="version-report" />
             </Link>
+            <Link href={scheduleHref(id, n)} asChild>
+              <Button label="Cable schedule" variant="secondary" size="compact" testID="version-schedule" />
+            </Link>
             <DownloadButton designId={id} designName={name} number={n} />
           </View>
           <Tabs
@@ -79,7 +82,14 @@ export function VersionScreen({ id, n }: { id: number; n: number }) {
             ]}
           />
           {section === 'devices' ? <DeviceCards devices={views.devices} /> : null}
-          {section === 'cables' ? <DataTable label="Cables" columns={CABLE_COLUMNS} rows={views.cables} testID="version-cables" /> : null}
+          {section === 'cables' ? (
+            <>
+              <Link href={scheduleHref(id, n)} asChild>
+                <Button label="Open the cable schedule: search, racks, labels and exports" variant="ghost" size="compact" testID="version-cables-schedule" />
+              </Link>
+              <DataTable label="Cables" columns={CABLE_COLUMNS} rows={views.cables} testID="version-cables" />
+            </>
+          ) : null}
           {section === 'networks' ? <DataTable label="Networks" columns={NETWORK_COLUMNS} rows={views.networks} testID="version-networks" /> : null}
         </>
       ) : null}

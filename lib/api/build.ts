@@ -1,5 +1,5 @@
 import { onlineManager, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { useEffect } from 'react';
+import { useEffect, useSyncExternalStore } from 'react';
 import { useStore } from 'zustand';
 import type { BuildResponse, ChecklistResponse, HistoryResponse, MarkBody, MarkResponse, PhotoResponse, StepBody, StepMarkResponse } from '@/shared/api/build';
 import { api } from '@/lib/api/client';
@@ -10,7 +10,7 @@ import { withPending, type ShownRecord } from '@/lib/build/pending';
 import { createBuildQueue, defaultQueueStorage, requestOf, type BuildQueue, type BuildQueueState, type FlushReport, type QueuedItem } from '@/lib/build/queue';
 
 /**
- * The site-work routes (api.md) for the phone screens: the build record and its history as
+ * The site-work routes (docs/api.md) for the phone screens: the build record and its history as
  * queries, marks through the offline queue (lib/build/queue.ts) or straight to the server, photos
  * straight to the server. The build record hangs under its version's key, so anything that
  * refreshes a design refreshes its build records too.
@@ -115,6 +115,24 @@ export async function sendQueued(item: QueuedItem): Promise<void> {
 
 export const QUEUE_RETRY_MS = 20_000;
 
+/** Send this account's waiting items now; afterwards the build records of the versions that received marks are fetched again. */
+export async function flushQueue(queue: BuildQueue, queryClient: QueryClient, userId: number): Promise<FlushReport> {
+  const versions = new Map(queue.getState().items.map((i) => [`${i.designId}/${i.version}`, [i.designId, i.version] as const]));
+  const report: FlushReport = await queue.getState().flush(sendQueued, userId);
+  if (report.sent.length + report.refused.length > 0) {
+    await Promise.all([...versions.values()].map(([id, n]) => refreshBuild(queryClient, id, n)));
+  }
+  return report;
+}
+
+/** "Send now" and "Retry": a flush asked for by the installer, even when the browser believes it is offline. */
+export function useSendNow(queue: BuildQueue = buildQueue): (() => Promise<FlushReport | null>) | null {
+  const queryClient = useQueryClient();
+  const userId = useMe().data?.id ?? null;
+  if (userId === null) return null;
+  return () => flushQueue(queue, queryClient, userId);
+}
+
 /**
  * Keep the queue moving while a screen that marks is open: flush now, whenever the browser comes
  * back online (React Query's onlineManager), and every 20 s while items wait; after each flush the
@@ -128,10 +146,7 @@ export function useQueueSender(queue: BuildQueue = buildQueue): void {
     let stopped = false;
     const flush = async () => {
       if (stopped || !onlineManager.isOnline()) return;
-      const versions = new Map(queue.getState().items.map((i) => [`${i.designId}/${i.version}`, [i.designId, i.version] as const]));
-      const report: FlushReport = await queue.getState().flush(sendQueued, userId);
-      if (report.sent.length + report.refused.length === 0) return;
-      await Promise.all([...versions.values()].map(([id, n]) => refreshBuild(queryClient, id, n)));
+      await flushQueue(queue, queryClient, userId);
     };
     void flush();
     const unsubscribe = onlineManager.subscribe((online) => {
@@ -164,4 +179,13 @@ export function useShownBuild(id: number, n: number, queue: BuildQueue = buildQu
   const mine = me ? items.filter((i) => i.userId === me.id) : [];
   const shown = query.data && me ? withPending(query.data, mine, { id: me.id, name: me.name }) : undefined;
   return { shown, query };
+}
+
+/** Whether the browser has a connection, as React Query's onlineManager sees it (it follows the online and offline events). */
+export function useOnline(): boolean {
+  return useSyncExternalStore(
+    (listener) => onlineManager.subscribe(listener),
+    () => onlineManager.isOnline(),
+    () => true,
+  );
 }

@@ -66,12 +66,25 @@ export async function apiUpload<T>(path: string, form: FormData): Promise<T> {
   return data as T;
 }
 
+/** A file the server makes (CSV, workbook): the bytes as a Blob, errors as for every other request. */
+export async function apiFile(path: string): Promise<Blob> {
+  let response: Response;
+  try {
+    response = await fetch(BASE_URL + path, { method: 'GET', credentials: 'include' });
+  } catch {
+    throw new ApiRequestError(0, { error: 'Cablewright could not reach the server. Check the connection and try again.' });
+  }
+  if (!response.ok) throw new ApiRequestError(response.status, await readBody(response));
+  return response.blob();
+}
+
 export const api = {
   get: <T>(path: string) => apiRequest<T>('GET', path),
   post: <T>(path: string, body?: unknown) => apiRequest<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => apiRequest<T>('PATCH', path, body),
   delete: <T = void>(path: string) => apiRequest<T>('DELETE', path),
   upload: <T>(path: string, form: FormData) => apiUpload<T>(path, form),
+  file: (path: string) => apiFile(path),
 };
 
 async function readBody(response: Response): Promise<unknown> {

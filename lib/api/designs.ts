@@ -15,13 +15,14 @@ export const designKeys = {
   version: (id: number, n: number) => [...designKeys.design(id), 'version', n] as const,
   report: (id: number, n: number) => [...designKeys.version(id, n), 'report'] as const,
   reportPage: (id: number, n: number) => [...designKeys.version(id, n), 'report-page'] as const,
+  afterOne: (id: number, n: number) => [...designKeys.version(id, n), 'after-one'] as const,
   diff: (id: number, from: number, to: number) => [...designKeys.design(id), 'diff', from, to] as const,
 };
 
 /** Lists and review states change when teammates act, so they are looked at again after half a minute. */
 export const DESIGNS_STALE_MS = 30_000;
 /**
- * A version's document never changes once saved (api.md): documents, reports and diffs stay cached.
+ * A version's document never changes once saved (docs/api.md): documents, reports and diffs stay cached.
  * Its review thread does change; screens read that from the design query, which goes stale.
  */
 export const VERSION_STALE_MS = Infinity;

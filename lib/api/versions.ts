@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { DiffResponse, ReportPageResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
+import type { AfterOneResponse, DiffResponse, ReportPageResponse, ReportResponse, RestoreBody, SaveVersionBody, SaveVersionResponse, VersionResponse } from '@/shared/api/designs';
 import { api, isApiRequestError } from '@/lib/api/client';
 import { designKeys, VERSION_STALE_MS } from '@/lib/api/designs';
 import { useSessionPending } from '@/lib/api/session-gate';
@@ -43,6 +43,18 @@ export function useReportPage(id: number, n: number) {
     },
     staleTime: VERSION_STALE_MS,
     enabled: !pending,
+  });
+}
+
+/** For each unit not owned by one host, what taking it down cuts off and leaves exposed (stored with the version). */
+export function useVersionAfterOne(id: number, n: number, options: { enabled?: boolean } = {}) {
+  const pending = useSessionPending();
+  return useQuery({
+    queryKey: designKeys.afterOne(id, n),
+    queryFn: () => api.get<AfterOneResponse>(`/api/designs/${id}/versions/${n}/after-one`),
+    select: (data) => data.afterOneFailure,
+    staleTime: VERSION_STALE_MS,
+    enabled: !pending && (options.enabled ?? true),
   });
 }
 

@@ -271,7 +271,7 @@ export function itemsOf(items: readonly QueuedItem[], designId: number, version:
   return items.filter((i) => i.designId === designId && i.version === version);
 }
 
-/** The request body of an item (api.md: POST …/build/marks or …/build/steps). */
+/** The request body of an item (docs/api.md: POST …/build/marks or …/build/steps). */
 export function requestOf(item: QueuedItem): { path: string; body: Record<string, unknown> } {
   const base = `/api/designs/${item.designId}/versions/${item.version}/build`;
   return item.kind === 'mark'

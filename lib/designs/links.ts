@@ -30,3 +30,18 @@ export function positiveInt(value: string | string[] | undefined): number | null
   if (typeof value !== 'string' || !/^[1-9][0-9]{0,8}$/.test(value)) return null;
   return Number(value);
 }
+
+/** The cable schedule of a version. Typed loosely like the editor's: generated route types may lag behind. */
+export function scheduleHref(id: number, n: number): Href {
+  return `/designs/${id}/versions/${n}/cables` as Href;
+}
+
+/** One cable's detail; the id is user text, so it is percent-encoded (RFC 3986 §2.1). */
+export function cableHref(id: number, n: number, cableId: string): Href {
+  return `/designs/${id}/versions/${n}/cables/${encodeURIComponent(cableId)}` as Href;
+}
+
+/** The printable label sheet of a version. */
+export function labelSheetHref(id: number, n: number): Href {
+  return `/designs/${id}/versions/${n}/labels` as Href;
+}

@@ -1,7 +1,7 @@
 import type { DesignStatus } from '@/shared/api/designs';
 import type { ReportSummary } from '@/shared/analysis/summary';
 
-/** Our words for the review states (product.md: draft / in review / approved / changes asked). */
+/** Our words for the review states (docs/demo.md: draft / in review / approved / changes asked). */
 export const STATUS_LABELS: Record<DesignStatus, string> = {
   draft: 'Draft',
   'in-review': 'In review',

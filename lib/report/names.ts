@@ -1,6 +1,7 @@
 import type { Report, UnitKind } from '@/shared/analysis/types';
 import { displayName, indexTopology, portLabel, type TopologyIndex } from '@/shared/topology';
 import type { Cable, Topology } from '@/shared/topology/schema';
+import { powerModel } from '@/shared/analysis/power';
 
 /**
  * Names a reviewer reads instead of ids: "switch fab-a", "card-1 of cam-rec-2", "controller ctl-a
@@ -35,10 +36,13 @@ export function createNamer(doc: Topology, index: TopologyIndex = indexTopology(
     return found ? displayName(found) : id;
   };
 
+  const power = powerModel(doc);
   const kindOf = (id: string): UnitKind | null => {
     if (index.cables.has(id)) return 'cable';
     if (index.adapters.has(id)) return 'adapter';
     if (index.controllers.has(id)) return 'controller';
+    if (power.psus.has(id)) return 'psu';
+    if (power.feeds.has(id)) return 'feed';
     return index.devices.get(id)?.kind === 'switch' ? 'switch' : null;
   };
 
@@ -49,6 +53,10 @@ export function createNamer(doc: Topology, index: TopologyIndex = indexTopology(
     if (adapter) return `${displayName(adapter.adapter)} of ${displayName(adapter.host)}`;
     const controller = index.controllers.get(id);
     if (controller) return `controller ${displayName(controller.controller)} of ${displayName(controller.array)}`;
+    const psu = power.psus.get(id);
+    if (psu) return `power supply ${displayName(psu.psu)} of ${displayName(psu.device)}`;
+    const feed = power.feeds.get(id);
+    if (feed) return `power feed ${displayName(feed)}`;
     const found = index.devices.get(id);
     if (found?.kind === 'switch') return `switch ${displayName(found)}`;
     return name(id);
@@ -61,7 +69,7 @@ export function createNamer(doc: Topology, index: TopologyIndex = indexTopology(
     if (cable) return `cable ${cableTitle(cable)}`;
     const network = index.networks.get(id);
     if (network) return `network ${displayName(network)}`;
-    if (index.adapters.has(id) || index.controllers.has(id)) return unit(id);
+    if (index.adapters.has(id) || index.controllers.has(id) || power.psus.has(id) || power.feeds.has(id)) return unit(id);
     return id;
   }
 

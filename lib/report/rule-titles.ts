@@ -49,6 +49,8 @@ export const RULE_TITLES: Record<RuleId, string> = {
   'device-above-rack-top': 'Device above the top of its rack',
   'cable-shorter-than-estimate': 'Cable shorter than the run it needs',
   'cable-estimate-beyond-reach': 'Run longer than the media can carry',
+  'psu-no-feed': 'Power supply on no feed',
+  'psus-one-feed': 'Every power supply on one feed',
 };
 
 // Looked up through a Map: a rule id comes with a report, and "constructor" must not find Object's.

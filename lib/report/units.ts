@@ -11,11 +11,14 @@ export const UNIT_KIND_LABELS: Record<UnitKind, string> = {
   controller: 'Controller',
   adapter: 'Card',
   cable: 'Cable',
+  psu: 'Power supply',
+  feed: 'Power feed',
 };
 
 /**
- * Every failure unit of the document (resilience-analysis.md: each cable, card, switch and
- * controller), the big ones first: switches, controllers, cards, then cables, in document order.
+ * Every failure unit of the document (docs/analysis.md: each cable, card, switch and
+ * controller; docs/topology-format.md format 2: each PSU and power feed), the big ones first: switches,
+ * controllers, cards, cables, then feeds and PSUs, in document order.
  */
 export function failureUnits(doc: Topology, index: TopologyIndex = indexTopology(doc)): FailureUnit[] {
   const namer = createNamer(doc, index);
@@ -32,6 +35,9 @@ export function failureUnits(doc: Topology, index: TopologyIndex = indexTopology
     if (adapter.ports.some((p) => p.role === 'data')) add(id, 'adapter', [displayName(host), 'card']);
   }
   for (const cable of doc.cables) add(cable.id, 'cable', [cable.label ?? '']);
+  // Power (format 2): feeds, then each device's supplies.
+  for (const feed of doc.powerFeeds ?? []) add(feed.id, 'feed', [displayName(feed), 'power feed']);
+  for (const device of doc.devices) for (const psu of device.psus ?? []) add(psu.id, 'psu', [displayName(device), displayName(psu), 'power supply psu']);
   return units;
 }
 

@@ -1,6 +1,6 @@
 import { toIssues, type Issue } from '@/shared/api/common';
 import { saveVersionBody } from '@/shared/api/designs';
-import { analyze } from '@/shared/analysis/analyze';
+import { analyze, analyzeWithAfterOne } from '@/shared/analysis/analyze';
 import { diffTopologies } from '@/shared/diff';
 import { summarize, type ReportSummary } from '@/shared/analysis/summary';
 import { assignStableLabels, labelHistoryFromData, NO_LABEL_HISTORY, type LabelHistoryData } from '@/shared/labels';
@@ -16,7 +16,13 @@ import { contentHash } from '@/server/services/designs/canonical';
  */
 
 /** A document checked and analysed once, ready to store: its JSON, hash, summary and full report. */
-export type PreparedText = { json: string; hash: string; summary: ReportSummary; reportJson: string };
+export type PreparedText = { json: string; hash: string; summary: ReportSummary; reportJson: string; afterOneJson: string | null };
+
+/**
+ * How long a save spends on the after-one analysis before leaving it to be computed on request: a
+ * save must never fail for it. 5,000 hosts take about 4 s on one core.
+ */
+export const AFTER_ONE_SAVE_BUDGET_MS = 8000;
 
 /** `refused`: the schema's issues (paths inside the document); `failed`: the analysis threw. */
 export type TaskOutcome<T> = { ok: true; value: T } | { ok: false; refused: Issue[] } | { ok: false; failed: string };
@@ -82,8 +88,9 @@ export function prepareSave(input: SaveInput): SaveOutcome {
 function analysed(checked: Topology, labels: LabelHistoryData | undefined): TaskOutcome<PreparedText> {
   const doc = assignStableLabels(checked, labels ? labelHistoryFromData(labels) : NO_LABEL_HISTORY);
   try {
-    const report = analyze(doc);
-    return { ok: true, value: { json: JSON.stringify(doc), hash: contentHash(doc), summary: summarize(report, doc), reportJson: JSON.stringify(report) } };
+    const { report, afterOneFailure } = analyzeWithAfterOne(doc, Date.now() + AFTER_ONE_SAVE_BUDGET_MS);
+    const afterOneJson = afterOneFailure ? JSON.stringify(afterOneFailure) : null;
+    return { ok: true, value: { json: JSON.stringify(doc), hash: contentHash(doc), summary: summarize(report, doc), reportJson: JSON.stringify(report), afterOneJson } };
   } catch (error) {
     return { ok: false, failed: error instanceof Error ? error.message : String(error) };
   }
@@ -96,6 +103,17 @@ export function report(documentJson: string): TaskOutcome<{ summary: ReportSumma
   try {
     const full = analyze(checked.doc);
     return { ok: true, value: { summary: summarize(full, checked.doc), reportJson: JSON.stringify(full) } };
+  } catch (error) {
+    return { ok: false, failed: error instanceof Error ? error.message : String(error) };
+  }
+}
+
+/** afterOneFailure of a stored document (JSON text), for versions stored without it. */
+export function afterOne(documentJson: string): TaskOutcome<{ afterOneJson: string }> {
+  const checked = validateTopology(JSON.parse(documentJson) as unknown);
+  if (!checked.ok) return { ok: false, refused: checked.issues };
+  try {
+    return { ok: true, value: { afterOneJson: JSON.stringify(analyze(checked.doc, { afterOne: true }).afterOneFailure) } };
   } catch (error) {
     return { ok: false, failed: error instanceof Error ? error.message : String(error) };
   }
@@ -129,6 +147,7 @@ export const TASKS = new Map<string, (input: never) => unknown>([
   ['prepare', prepare],
   ['prepareSave', prepareSave],
   ['report', report],
+  ['after-one', afterOne],
   ['storedDocument', storedDocument],
   ['diff', diff],
 ]);

@@ -12,7 +12,7 @@ const parsedInput = new WeakMap<Request, unknown>();
 
 /**
  * Validate body, params and query with the shared zod schemas before a handler runs. Any problem is a 400
- * listing every field path at once — body paths bare as in api.md (`email`, `devices.3.ports.0.id`; `''`
+ * listing every field path at once — body paths bare as in docs/api.md (`email`, `devices.3.ports.0.id`; `''`
  * for a missing body), params and query prefixed (`params.id`). The parsed values (trimmed, coerced,
  * lowercased) are what the handler gets from `input(req)`; parts without a schema are `undefined`.
  */

@@ -7,6 +7,8 @@ import * as designsAndVersions from './0005-designs-and-versions';
 import * as versionReports from './0006-version-reports';
 import * as designsListIndex from './0007-designs-list-index';
 import * as buildRecord from './0010-build-record';
+import * as versionAfterOne from './0011-version-after-one';
+import * as chapSecrets from './0012-chap-secrets';
 
 /**
  * Every migration, in order. To add one: create `NNNN-what-it-does.ts` exporting `up` and `down`,
@@ -21,4 +23,6 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, module: Migration
   ['0006-version-reports', versionReports],
   ['0007-designs-list-index', designsListIndex],
   ['0010-build-record', buildRecord],
+  ['0011-version-after-one', versionAfterOne],
+  ['0012-chap-secrets', chapSecrets],
 ];

@@ -16,6 +16,8 @@ export interface DesignVersionRow extends Model<InferAttributes<DesignVersionRow
   contentHash: string;
   /** The full analysis report as JSON text; null on versions saved before reports were stored (migration 0006). */
   report: CreationOptional<string | null>;
+  /** afterOneFailure as JSON text; null before migration 0011 and when it did not finish in the save's budget. */
+  afterOne: CreationOptional<string | null>;
   createdAt: Date;
 }
 
@@ -32,6 +34,7 @@ export function defineDesignVersion(sequelize: Sequelize): ModelStatic<DesignVer
       summary: { type: DataTypes.TEXT, allowNull: false },
       contentHash: { type: DataTypes.STRING(64), allowNull: false },
       report: { type: DataTypes.TEXT, allowNull: true },
+      afterOne: { type: DataTypes.TEXT, allowNull: true },
       createdAt: { type: DataTypes.DATE, allowNull: false },
     },
     { tableName: 'design_versions', timestamps: false },

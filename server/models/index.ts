@@ -9,6 +9,7 @@ import {
   type BuildPhotoRow,
   type BuildStepMarkRow,
 } from './build-record';
+import { defineChapSecret, defineSecretReveal, type ChapSecretRow, type SecretRevealRow } from './chap-secret';
 import { defineDesign, type DesignRow } from './design';
 import { defineDesignVersion, type DesignVersionRow } from './design-version';
 import { defineInvitation, type InvitationRow } from './invitation';
@@ -17,6 +18,7 @@ import { defineTeam, type TeamRow } from './team';
 import { defineReviewEvent, type ReviewEventRow } from './review-event';
 import { defineUser, type UserRow } from './user';
 
+export type { ChapSecretRow, SecretRevealRow };
 export type { BuildCompletionRow, BuildMarkRow, BuildPhotoRow, BuildStepMarkRow, DesignRow, DesignVersionRow, InvitationRow, ReviewEventRow, SessionRow, TeamRow, UserRow };
 
 export type Models = {
@@ -31,6 +33,8 @@ export type Models = {
   BuildStepMark: ModelStatic<BuildStepMarkRow>;
   BuildPhoto: ModelStatic<BuildPhotoRow>;
   BuildCompletion: ModelStatic<BuildCompletionRow>;
+  ChapSecret: ModelStatic<ChapSecretRow>;
+  SecretReveal: ModelStatic<SecretRevealRow>;
 };
 
 const cache = new WeakMap<Sequelize, Models>();
@@ -54,6 +58,8 @@ export function getModels(sequelize: Sequelize): Models {
     BuildStepMark: defineBuildStepMark(sequelize),
     BuildPhoto: defineBuildPhoto(sequelize),
     BuildCompletion: defineBuildCompletion(sequelize),
+    ChapSecret: defineChapSecret(sequelize),
+    SecretReveal: defineSecretReveal(sequelize),
   };
   models.Team.hasMany(models.User, { foreignKey: 'teamId', as: 'members' });
   models.User.belongsTo(models.Team, { foreignKey: 'teamId', as: 'team' });

@@ -7,8 +7,8 @@ import { validate } from '@/server/middleware/validate';
 import type { Services } from '@/server/services';
 
 /**
- * /api/designs/:id/versions/:n — the build sheet (api.md): the cable schedule as JSON, `cables.csv`,
- * `addresses.csv` and the workbook `cables.xlsx`. Read access as for the version itself: every role,
+ * /api/designs/:id/versions/:n — the build sheet (docs/api.md): the cable schedule as JSON, `cables.csv`,
+ * `addresses.csv`, the workbook `cables.xlsx` and the hosts' `login-plan`. Read access as for the version itself: every role,
  * installers approved versions only, another team 404.
  */
 export function buildSheetRoutes({ buildSheet }: Services): Router {
@@ -34,6 +34,11 @@ export function buildSheetRoutes({ buildSheet }: Services): Router {
   router.get('/:id/versions/:n/cables.xlsx', read, one, async (req, res) => {
     const { id, n } = one.input(req).params;
     replyFile(res, await buildSheet.cablesXlsx(currentUser(req), id, n));
+  });
+
+  router.get('/:id/versions/:n/login-plan', read, one, async (req, res) => {
+    const { id, n } = one.input(req).params;
+    reply(res, await buildSheet.loginPlan(currentUser(req), id, n), 200, (plan) => plan);
   });
 
   return router;

@@ -8,7 +8,7 @@ import { validate } from '@/server/middleware/validate';
 import type { Services } from '@/server/services';
 
 /**
- * /api/designs/:id/versions/:n/build… — the build record (api.md). Reading: every role that may read
+ * /api/designs/:id/versions/:n/build… — the build record (docs/api.md). Reading: every role that may read
  * the version (installers approved versions only, another team 404). Marking and photos: installers
  * and admins (403 for the others), on approved versions only (installers 404 otherwise, as for
  * reading; admins 409). A repeated clientId answers 200 with the mark stored the first time.

@@ -10,6 +10,7 @@ import { designRoutes } from './designs';
 import { devMailRoutes } from './dev-mail';
 import { invitationRoutes } from './invitations';
 import { photoRoutes } from './photos';
+import { secretRoutes } from './secrets';
 import { teamRoutes } from './team';
 import { versionRoutes } from './versions';
 
@@ -22,7 +23,7 @@ export function apiRoutes(services: Services, mailbox: Mailbox | null, config: C
   api.use('/auth', authRoutes(services, config));
   api.use('/team', teamRoutes(services));
   api.use('/invitations', invitationRoutes(services, config));
-  api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services), buildRoutes(services));
+  api.use('/designs', designRoutes(services), versionRoutes(services), buildSheetRoutes(services), buildRoutes(services), secretRoutes(services));
   api.use('/photos', photoRoutes(services));
   api.use('/dev/mail', devMailRoutes(mailbox));
   api.use(apiNotFound);

@@ -55,6 +55,12 @@ export function versionRoutes({ versions, reviews }: Services): Router {
     replyRawJson(res, await versions.reportPage(opened.value, viewer), 200);
   });
 
+  // For every unit not owned by one host: the pairs it cuts off and those it leaves exposed (docs/api.md `--after-one`).
+  router.get('/:id/versions/:n/after-one', read, one, async (req, res) => {
+    const { id, n } = one.input(req).params;
+    replyJsonText(res, await versions.afterOne(currentUser(req), id, n), 200, (stored) => ({ afterOneFailure: stored.afterOneJson }));
+  });
+
   // The diff reads "from version `against` to version `n`": what changed going from the first to the second.
   router.get('/:id/versions/:n/diff', read, diffing, async (req, res) => {
     const { params, query } = diffing.input(req);

@@ -15,7 +15,7 @@ const HOUR = 60 * 60 * 1000;
 const DAY = 24 * HOUR;
 
 /**
- * The demo designs (product.md), written through the same services as the API so the stored
+ * The demo designs (docs/demo.md), written through the same services as the API so the stored
  * summaries are real analyses. The history is backdated to the days before seeding, so the designs
  * screen reads like a week of work.
  *

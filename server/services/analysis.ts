@@ -23,6 +23,8 @@ export type Analysis = {
   /** The same for a document that is already JSON text (a stored version being restored). */
   prepareJson(documentJson: string, labels?: LabelHistory): Promise<Result<PreparedText>>;
   report(documentJson: string): Promise<Result<StoredReport>>;
+  /** afterOneFailure (docs/api.md `--after-one`) of a stored document, as JSON text. */
+  afterOne(documentJson: string): Promise<Result<{ afterOneJson: string }>>;
   /**
    * A save's whole body as the JSON text that came over the wire: parsed, its fields checked, its
    * document validated and analysed, in one task. 400s come back as the validate middleware's would.
@@ -50,6 +52,7 @@ export function poolAnalysis(limits: Config['analysis']): Analysis {
     prepare: (document, labels) => runTask(pool, limits, 'prepare', prepareInput(JSON.stringify(document), labels), 'it was not saved'),
     prepareJson: (documentJson, labels) => runTask(pool, limits, 'prepare', prepareInput(documentJson, labels), 'it was not saved'),
     report: (documentJson) => runTask(pool, limits, 'report', documentJson, 'its report cannot be shown'),
+    afterOne: (documentJson) => runTask(pool, limits, 'after-one', documentJson, 'its after-one-failure analysis cannot be shown'),
     prepareSave: async (bodyText, labels) => {
       try {
         return saveOutcome(await pool.run<tasks.SaveOutcome>('prepareSave', saveInput(bodyText, labels)));
@@ -72,6 +75,7 @@ export function inProcessAnalysis(): Analysis {
     prepare: async (document, labels) => outcome(tasks.prepare(prepareInput(JSON.stringify(document), labels)), 'it was not saved'),
     prepareJson: async (documentJson, labels) => outcome(tasks.prepare(prepareInput(documentJson, labels)), 'it was not saved'),
     report: async (documentJson) => outcome(tasks.report(documentJson), 'its report cannot be shown'),
+    afterOne: async (documentJson) => outcome(tasks.afterOne(documentJson), 'its after-one-failure analysis cannot be shown'),
     prepareSave: async (bodyText, labels) => saveOutcome(tasks.prepareSave(saveInput(bodyText, labels))),
     storedDocument: async (documentJson) => outcome(tasks.storedDocument(documentJson), 'it cannot be shown'),
     diff: async (before, after) => outcome(tasks.diff({ before, after }), 'the comparison cannot be shown'),

@@ -1,5 +1,4 @@
-import type { User } from '@/shared/api/auth';
-import type { SignInBody } from '@/shared/api/auth';
+import type { User, SignInBody } from '@/shared/api/auth';
 import type { ServiceDeps } from './deps';
 import { toUser } from './dto';
 import { PasswordsBusyError } from './passwords';

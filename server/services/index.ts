@@ -5,6 +5,7 @@ import type { ServiceDeps } from './deps';
 import { createDesignServices } from './designs';
 import { createInvitationService } from './invitations';
 import { createPhotoStore } from './photos/store';
+import { createSecretsService } from './secrets';
 import { createSignInThrottle } from './sign-in-throttle';
 import { createTeamService } from './team';
 
@@ -16,6 +17,7 @@ export function createServices(deps: ServiceDeps) {
     team: createTeamService(deps),
     invitations: createInvitationService(deps),
     ...createDesignServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis }),
+    secrets: createSecretsService(deps),
     ...createBuildServices({ ...deps, appUrl: deps.config.appUrl, now: () => new Date(), analysis, photos: createPhotoStore(deps.config.photosDir) }),
   };
 }

@@ -19,7 +19,7 @@ export type FailureKind =
 
 /**
  * `issues` point at the request's fields (for `invalid`); `details` are extra fields of the error body,
- * such as a save conflict's `latestVersion` (api.md).
+ * such as a save conflict's `latestVersion` (docs/api.md).
  */
 export type Failure = { ok: false; kind: FailureKind; message: string; issues?: Issue[]; details?: Record<string, unknown> };
 export type Result<T> = { ok: true; value: T } | Failure;

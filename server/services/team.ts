@@ -12,7 +12,7 @@ const NO_SUCH_MEMBER = 'There is no such member in your team.';
 export function createTeamService({ sequelize, models }: Pick<ServiceDeps, 'sequelize' | 'models'>) {
   const { Team, User: Users, Invitation, Session } = models;
 
-  /** A member of the viewer's team; members of other teams are "not found" like ids that do not exist (api.md). */
+  /** A member of the viewer's team; members of other teams are "not found" like ids that do not exist (docs/api.md). */
   async function findMember(viewer: User, memberId: number) {
     return Users.findOne({ where: { id: memberId, teamId: viewer.teamId, removedAt: null } });
   }

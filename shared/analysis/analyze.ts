@@ -1,8 +1,9 @@
 import { byId, createContext } from '@/shared/analysis/context';
-import { analyzeResilience } from '@/shared/analysis/resilience';
+import { afterOneFailure } from '@/shared/analysis/after-one';
+import { analyzeResilience, ResilienceEngine } from '@/shared/analysis/resilience';
 import { RULE_GROUPS } from '@/shared/analysis/rules';
 import { redundancyFindings } from '@/shared/analysis/rules/redundancy';
-import type { AnalyzeOptions, Finding, Report, Severity } from '@/shared/analysis/types';
+import type { AfterOneResult, AnalyzeOptions, Finding, Report, Severity } from '@/shared/analysis/types';
 import type { Topology } from '@/shared/topology/schema';
 
 /**
@@ -32,12 +33,29 @@ function compareFindings(x: Finding, y: Finding): number {
   );
 }
 
-export function analyze(doc: Topology, options: AnalyzeOptions = {}): Report {
-  const ctx = createContext(doc, options.failed);
-  const { hosts, failures } = analyzeResilience(ctx);
+function run(doc: Topology, failed: readonly string[] | undefined) {
+  const ctx = createContext(doc, failed);
+  const engine = new ResilienceEngine(ctx);
+  const resilience = analyzeResilience(ctx, engine);
+  const { hosts, failures } = resilience;
   const findings = redundancyFindings(ctx, hosts).slice();
   // Appended one by one: spreading a long list into push() overflows the call stack.
   for (const group of RULE_GROUPS) for (const finding of group(ctx)) findings.push(finding);
   findings.sort(compareFindings);
-  return { hosts, failures, findings };
+  return { ctx, engine, resilience, report: { hosts, failures, findings } as Report };
+}
+
+export function analyze(doc: Topology, options: AnalyzeOptions = {}): Report {
+  const { ctx, engine, resilience, report } = run(doc, options.failed);
+  if (!options.afterOne) return report;
+  return { ...report, afterOneFailure: afterOneFailure(ctx, resilience, engine) };
+}
+
+/**
+ * The report (without afterOneFailure) and, apart, afterOneFailure — or null when it was not done by
+ * `deadline` (a Date.now() time). The server stores the two side by side.
+ */
+export function analyzeWithAfterOne(doc: Topology, deadline: number): { report: Report; afterOneFailure: AfterOneResult[] | null } {
+  const { ctx, engine, resilience, report } = run(doc, undefined);
+  return { report, afterOneFailure: afterOneFailure(ctx, resilience, engine, deadline) };
 }

@@ -2,6 +2,7 @@ import { displayName, indexTopology, type PortRef, type TopologyIndex } from '@/
 import type { Cable, Topology } from '@/shared/topology/schema';
 import type { UnitKind } from '@/shared/analysis/types';
 import { parseIp, type Ip } from '@/shared/address/ip';
+import { powerModel, withPowerFailures, type PowerModel } from '@/shared/analysis/power';
 
 /**
  * What every part of the analysis needs to know about one document: the lookups, which units have
@@ -10,8 +11,15 @@ import { parseIp, type Ip } from '@/shared/address/ip';
 export type AnalysisContext = {
   doc: Topology;
   index: TopologyIndex;
+  /**
+   * Every unit that is down: those asked for (what-if), plus the data-path units of each device
+   * those failures leave without power (power.ts).
+   */
   failed: ReadonlySet<string>;
-  /** With no networks at all, every data port pairs with every other (resilience-analysis.md). */
+  /** The units asked for, as given. */
+  requested: readonly string[];
+  power: PowerModel;
+  /** With no networks at all, every data port pairs with every other (docs/analysis.md). */
   hasNetworks: boolean;
   /** The cables that can carry a data path, in document order; filled on first use (see dataCables). */
   cache: { dataCables?: readonly DataCableEnds[]; ips?: Map<string, Ip | null> };
@@ -27,7 +35,8 @@ export type DataCableEnds = { cable: Cable; a: PortRef; b: PortRef; roleA: EndRo
 export type EndRole = 'controller' | 'host' | 'switch' | 'none';
 
 export function createContext(doc: Topology, failed: readonly string[] = []): AnalysisContext {
-  return { doc, index: indexTopology(doc), failed: new Set(failed), hasNetworks: doc.networks.length > 0, cache: {} };
+  const power = powerModel(doc);
+  return { doc, index: indexTopology(doc), failed: withPowerFailures(power, failed), requested: failed, power, hasNetworks: doc.networks.length > 0, cache: {} };
 }
 
 export function isForwardingSwitch(ctx: AnalysisContext, ref: PortRef): boolean {
@@ -89,6 +98,8 @@ export function unitKindOf(ctx: AnalysisContext, id: string): UnitKind | null {
   if (ctx.index.cables.has(id)) return 'cable';
   if (ctx.index.adapters.has(id)) return 'adapter';
   if (ctx.index.controllers.has(id)) return 'controller';
+  if (ctx.power.psus.has(id)) return 'psu';
+  if (ctx.power.feeds.has(id)) return 'feed';
   return ctx.index.devices.get(id)?.kind === 'switch' ? 'switch' : null;
 }
 
@@ -97,6 +108,8 @@ const KIND_WORDS: Record<UnitKind, string> = {
   adapter: 'card',
   switch: 'switch',
   controller: 'controller',
+  psu: 'power supply',
+  feed: 'power feed',
 };
 
 /** "switch fab-a", "card wms-db-1 card-2", "cable A-07": a unit as a designer names it. */
@@ -115,6 +128,11 @@ export function describeUnit(ctx: AnalysisContext, id: string): string {
     const { controller, array } = ctx.index.controllers.get(id)!;
     return `controller ${displayName(controller)} of ${displayName(array)}`;
   }
+  if (kind === 'psu') {
+    const { psu, device } = ctx.power.psus.get(id)!;
+    return `${KIND_WORDS.psu} ${displayName(psu)} of ${displayName(device)}`;
+  }
+  if (kind === 'feed') return `${KIND_WORDS.feed} ${displayName(ctx.power.feeds.get(id)!)}`;
   const device = ctx.index.devices.get(id);
   return device ? `${KIND_WORDS.switch} ${displayName(device)}` : id;
 }

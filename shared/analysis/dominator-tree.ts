@@ -10,6 +10,7 @@ import type { DominatorRun } from '@/shared/analysis/dominators';
 export class DominatorTree {
   private readonly depth: Int32Array;
   private readonly chains: (string[] | undefined)[];
+  private readonly sets: (Set<string> | undefined)[];
 
   constructor(
     private readonly graph: CompiledGraph,
@@ -19,6 +20,14 @@ export class DominatorTree {
     this.depth = new Int32Array(run.count);
     for (let v = 1; v < run.count; v += 1) this.depth[v] = this.depth[run.idom[v]] + 1;
     this.chains = new Array(run.count);
+    this.sets = new Array(run.count);
+  }
+
+  /** The same units as a set, for intersecting long chains without a quadratic scan. */
+  unitSet(v: number): Set<string> {
+    let set = this.sets[v];
+    if (!set) this.sets[v] = set = new Set(this.units(v));
+    return set;
   }
 
   lowestCommonAncestor(x: number, y: number): number {

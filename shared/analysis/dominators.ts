@@ -37,16 +37,25 @@ export class DominatorSolver {
     return network === ANY_NETWORK || code === ANY_NETWORK || code === network;
   }
 
-  run(root: number, network: number): DominatorRun {
+  /** `down`: 1 for nodes to leave out of this run (units failed in addition to the graph's own). */
+  run(root: number, network: number, down?: Uint8Array): DominatorRun {
     for (const node of this.visited) this.numberOf[node] = -1;
     this.visited.length = 0;
-    const { nodes, parent, predStart, preds } = this.search(root, network);
+    const { nodes, parent, predStart, preds } = this.search(root, network, down);
     const idom = lengauerTarjan(nodes.length, parent, predStart, preds);
     return { nodes, idom, numberOf: this.numberOf, count: nodes.length };
   }
 
+  /** Only which nodes the run reaches: node index → preorder number, -1 when unreachable. */
+  reach(root: number, network: number, down?: Uint8Array): Int32Array {
+    for (const node of this.visited) this.numberOf[node] = -1;
+    this.visited.length = 0;
+    this.search(root, network, down);
+    return this.numberOf;
+  }
+
   /** Iterative DFS: preorder numbers, DFS-tree parents and predecessor lists (by preorder number). */
-  private search(root: number, network: number) {
+  private search(root: number, network: number, down: Uint8Array | undefined) {
     const { offsets, targets } = this.graph;
     const order: number[] = [root];
     const parentList: number[] = [-1];
@@ -68,6 +77,7 @@ export class DominatorSolver {
       stackEdge[top] = e + 1;
       if (!this.follows(e, network)) continue;
       const w = targets[e];
+      if (down && down[w]) continue;
       edgeFrom.push(this.numberOf[v]);
       if (this.numberOf[w] === -1) {
         this.numberOf[w] = order.length;

@@ -3,7 +3,7 @@ import type { PortRef } from '@/shared/topology/index';
 
 /**
  * Session counts: sessions(h, a) is the number of (host data port, controller data port) pairs of
- * host h and array a that a data path joins and whose networks pair (resilience-analysis.md).
+ * host h and array a that a data path joins and whose networks pair (docs/analysis.md).
  *
  * Data paths only ever run through data and shared switches, so two ports are joined exactly when
  * they are cabled to each other (direct attach) or cabled into the same cluster of switches joined
@@ -78,7 +78,10 @@ function forEachEnd(cables: readonly DataCableEnds[], visit: EndVisitor): void {
   }
 }
 
-export function countSessions(ctx: AnalysisContext): SessionTable {
+/** Switch clusters and the controller ports cabled into each, shared by the count and the pairing. */
+type Clusters = { clusters: UnionFind; clusterPorts: Map<string, Map<string, PortRef>>; cables: readonly DataCableEnds[] };
+
+function buildClusters(ctx: AnalysisContext): Clusters {
   const clusters = new UnionFind();
   const cables = dataCables(ctx);
   for (const ends of cables) {
@@ -92,6 +95,47 @@ export function countSessions(ctx: AnalysisContext): SessionTable {
     if (!ports) clusterPorts.set(cluster, (ports = new Map()));
     ports.set(here.port.id, here);
   });
+  return { clusters, clusterPorts, cables };
+}
+
+/** One host data port and the controller data ports it forms a session with, each once. */
+export type PortSessions = { hostPort: PortRef; controllerPorts: PortRef[] };
+
+/**
+ * The session pairing itself, pair by pair: for every host data port with at least one session,
+ * the controller ports it pairs with (first seen first; cluster ports in the order they were
+ * cabled). countSessions counts exactly these pairs; the login plan lists them.
+ */
+export function sessionPairs(ctx: AnalysisContext): PortSessions[] {
+  const { clusters, clusterPorts, cables } = buildClusters(ctx);
+  const links = new Map<string, { hostPort: PortRef; links: (PortRef | string)[] }>();
+  forEachEnd(cables, (here, role, there, thereRole) => {
+    if (role !== 'host') return;
+    const link = thereRole === 'switch' ? clusters.find(there.device.id) : there;
+    const entry = links.get(here.port.id);
+    if (entry) entry.links.push(link);
+    else links.set(here.port.id, { hostPort: here, links: [link] });
+  });
+  const out: PortSessions[] = [];
+  for (const { hostPort, links: far } of links.values()) {
+    const seen = new Set<string>();
+    const controllerPorts: PortRef[] = [];
+    for (const link of far) {
+      const candidates = typeof link === 'string' ? [...(clusterPorts.get(link)?.values() ?? [])] : [link];
+      for (const cp of candidates) {
+        if (seen.has(cp.port.id)) continue;
+        seen.add(cp.port.id);
+        if (!networksPair(ctx, hostPort.port.networkId, cp.port.networkId)) continue;
+        controllerPorts.push(cp);
+      }
+    }
+    if (controllerPorts.length > 0) out.push({ hostPort, controllerPorts });
+  }
+  return out;
+}
+
+export function countSessions(ctx: AnalysisContext): SessionTable {
+  const { clusters, clusterPorts, cables } = buildClusters(ctx);
   const table = new Table();
   // Host ports with a single cable into a cluster, the common case: one tally per (cluster, network).
   const tallies = new Map<string, Map<string | undefined, ArrayTally[]>>();

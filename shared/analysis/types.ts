@@ -1,7 +1,7 @@
-/** The analysis report (resilience-analysis.md): the same shape in the browser and on the server. */
+/** The analysis report (docs/analysis.md): the same shape in the browser and on the server. */
 export type Severity = 'error' | 'warning' | 'info';
 
-export type UnitKind = 'cable' | 'adapter' | 'switch' | 'controller';
+export type UnitKind = 'cable' | 'adapter' | 'switch' | 'controller' | 'psu' | 'feed';
 
 export type HostArrayResult = {
   host: string;
@@ -19,9 +19,23 @@ export type FailureResult = { unit: string; kind: UnitKind; cutsOff: HostArrayPa
 
 export type Finding = { rule: string; severity: Severity; subjects: string[]; message: string };
 
-export type Report = { hosts: HostArrayResult[]; failures: FailureResult[]; findings: Finding[] };
+/** A pair left up while one unit is down, and what alone would then cut it off. */
+export type ExposedPair = { host: string; array: string; singlePointsOfFailure: string[] };
+
+/** One unit down (docs/api.md `--after-one`): the pairs it cuts off, and those it leaves exposed. */
+export type AfterOneResult = { failed: string; exposed: ExposedPair[]; cutOff: HostArrayPair[] };
+
+export type Report = {
+  hosts: HostArrayResult[];
+  failures: FailureResult[];
+  findings: Finding[];
+  /** Only when asked for (AnalyzeOptions.afterOne): sorted by the failed unit's id. */
+  afterOneFailure?: AfterOneResult[];
+};
 
 export type AnalyzeOptions = {
   /** Units (cable, card, switch, controller ids) to treat as failed before anything is computed. */
   failed?: readonly string[];
+  /** Add `afterOneFailure` (docs/api.md `--after-one`). */
+  afterOne?: boolean;
 };

@@ -5,7 +5,7 @@ import { cleanText } from '../text/clean';
 import type { Person } from './designs';
 
 /**
- * Bodies, params and answers of the site-work routes (api.md): the build record of an approved
+ * Bodies, params and answers of the site-work routes (docs/api.md): the build record of an approved
  * version — cable marks, bring-up step marks, photos — and its progress. Records in answers are
  * keyed by cable, step and rack ids, which are user text: they are built without a prototype on
  * the server and must be read with `ownValue` (shared/keys/record.ts) on the client.

@@ -6,7 +6,7 @@ import type { Topology } from '../topology/schema';
 import { cleanText } from '../text/clean';
 
 /**
- * Bodies, params and answers of the designs and versions routes (api.md). The document itself is
+ * Bodies, params and answers of the designs and versions routes (docs/api.md). The document itself is
  * checked by `validateTopology` (shared/topology/validate.ts), which reports every problem with its
  * path; here it is only required to be present, so that its issues come out with `document.` paths.
  */
@@ -155,6 +155,8 @@ export type ReportResponse = { report: Report; summary: ReportSummary };
  * (as in ReportResponse).
  */
 export type ReportPageResponse = ReportResponse & { design: DesignDto; version: VersionDetail };
+/** GET …/versions/:n/after-one (api.md `--after-one`). */
+export type AfterOneResponse = { afterOneFailure: NonNullable<Report['afterOneFailure']> };
 export type ReviewResponse = { review: VersionReview; design: DesignDto };
 /** GET …/versions/:n/diff?against=m — what changed going from version m (before) to version n (after). */
 export type DiffResponse = { diff: TopologyDiff };

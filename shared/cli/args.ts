@@ -3,9 +3,9 @@
  * may be given any number of times, as `--failed=a,b` or `--failed a,b`; the ids of every
  * occurrence add up (a repeated id counts once). Ids are separated by commas, so an id that holds a
  * comma cannot be named here. `--` ends the options: what follows is a file name even when it
- * begins with `--`.
+ * begins with `--`. `--after-one` adds `afterOneFailure` to each report (docs/api.md).
  */
-export type CliArgs = { ok: true; files: string[]; failed: string[] } | { ok: false; reason: string };
+export type CliArgs = { ok: true; files: string[]; failed: string[]; afterOne: boolean } | { ok: false; reason: string };
 
 function ids(value: string): string[] {
   return value.split(',').filter((id) => id !== '');
@@ -15,10 +15,13 @@ export function parseCliArgs(args: readonly string[]): CliArgs {
   const files: string[] = [];
   const failed = new Set<string>();
   let options = true;
+  let afterOne = false;
   for (let i = 0; i < args.length; i += 1) {
     const arg = args[i];
     if (!options || !arg.startsWith('--')) {
       files.push(arg);
+    } else if (arg === '--after-one') {
+      afterOne = true;
     } else if (arg === '--') {
       options = false;
     } else if (arg.startsWith('--failed=')) {
@@ -33,5 +36,5 @@ export function parseCliArgs(args: readonly string[]): CliArgs {
     }
   }
   if (files.length === 0) return { ok: false, reason: 'Name at least one document file.' };
-  return { ok: true, files, failed: [...failed] };
+  return { ok: true, files, failed: [...failed], afterOne };
 }

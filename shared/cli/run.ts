@@ -5,7 +5,7 @@ import { failedIdIssues } from '@/shared/cli/failed-ids';
 import { validateTopology } from '@/shared/topology/validate';
 
 /**
- * `npm run analyze -- a.json [b.json …] [--failed=unit,unit]`. One file prints its report as
+ * `npm run analyze -- a.json [b.json …] [--failed=unit,unit] [--after-one]`. One file prints its report as
  * indented JSON; several print one compact report per line (JSON Lines) in the order given. A file
  * that is not a valid document — or that lacks a failure unit named by `--failed` — gets
  * `{"file", "errors"}` in its place on stdout and a sentence on stderr, and the command exits 2
@@ -19,9 +19,10 @@ export type CliIo = {
 };
 
 export const USAGE = [
-  'usage: npm run analyze -- design.json [more.json …] [--failed unit-id[,unit-id…]]…',
+  'usage: npm run analyze -- design.json [more.json …] [--failed unit-id[,unit-id…]]… [--after-one]',
   '  --failed=a,b or --failed a,b fails those units before the analysis; give it as often as you like, the ids add up.',
-  '  Each id must be a failure unit (a cable, card, switch or controller) of every file; an id holding a comma cannot be named.',
+  '  Each id must be a failure unit (a cable, card, switch, controller, PSU or power feed) of every file; an id holding a comma cannot be named.',
+  '  --after-one adds afterOneFailure: for each unit not owned by one host, the pairs it cuts off and those it leaves exposed.',
   '  -- ends the options. Exit 0 when every file was analysed, 2 otherwise.',
 ].join('\n');
 
@@ -70,7 +71,7 @@ export function runAnalyzeCli(args: readonly string[], io: CliIo): number {
     io.err(args.length === 0 ? USAGE : `${parsed.reason}\n${USAGE}`);
     return 2;
   }
-  const { files, failed } = parsed;
+  const { files, failed, afterOne } = parsed;
   let invalid = 0;
   const reject = (file: string, errors: Issue[], sentence: string) => {
     invalid += 1;
@@ -93,7 +94,7 @@ export function runAnalyzeCli(args: readonly string[], io: CliIo): number {
       reject(file, notUnits, failedSentence(file, notUnits));
       continue;
     }
-    const report = analyze(checked.doc, { failed });
+    const report = analyze(checked.doc, { failed, afterOne });
     io.out(files.length === 1 ? JSON.stringify(report, null, 2) : JSON.stringify(report));
   }
   return invalid > 0 ? 2 : 0;

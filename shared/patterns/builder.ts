@@ -38,13 +38,24 @@ export class PatternBuilder {
     this.doc.networks.push(network);
   }
 
-  array(id: string, controllers: Controller[]): void {
-    this.doc.devices.push({ id, kind: 'array', name: id, controllers });
+  /** An array; with a target name (`iqn`) when the pattern was given an initiator-name prefix. */
+  array(id: string, controllers: Controller[], iqn?: string): void {
+    this.doc.devices.push({ id, kind: 'array', name: id, controllers, ...(iqn ? { iqn } : {}) });
   }
 
   switch(id: string, role: 'data' | 'management' | 'shared', count: number, speedGbps: PortSpeed, connector: Connector): void {
     const ports = Array.from({ length: count }, (_, i) => this.port(id, { name: `p${i + 1}`, role: role === 'management' ? 'management' : 'data', speedGbps, connector }));
     this.doc.devices.push({ id, kind: 'switch', name: id, role, ports });
+  }
+
+  /**
+   * The target name a pattern gives its array: `<iqnPrefix>:storage.<array name>`, the name part
+   * folded to the characters iSCSI names allow (RFC 3722 §6: letters, digits, "-", "." and ":").
+   */
+  static targetName(iqnPrefix: string | undefined, arrayName: string): string | undefined {
+    if (!iqnPrefix) return undefined;
+    const part = arrayName.toLowerCase().replace(/[^a-z0-9.:-]+/g, '-').replace(/^-+|-+$/g, '') || 'array';
+    return `${iqnPrefix}:storage.${part}`;
   }
 
   host(id: string, adapters: Adapter[], iqn?: string): void {

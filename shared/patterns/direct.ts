@@ -48,7 +48,7 @@ export function directAttach(options: PatternOptions = {}): Topology {
   const controllers = Array.from({ length: controllerCount }, (_, c) =>
     b.group(arrayId, controllerName(c), names.map((_, h): PortSpec => ({ name: `p${h + 1}`, role: 'data', speedGbps, connector, networkId: c < links.length ? netId(h, c) : undefined }))),
   );
-  b.array(arrayId, controllers);
+  b.array(arrayId, controllers, PatternBuilder.targetName(options.iqnPrefix, arrayId));
 
   names.forEach((host, h) => {
     const adapters = Array.from({ length: cards }, (_, c) =>

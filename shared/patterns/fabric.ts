@@ -51,7 +51,7 @@ export function buildFabric(options: ManagedFabricOptions, withManagement: boole
     if (withManagement) specs.push(mgmtPort);
     return b.group(arrayId, controllerName(c), specs);
   });
-  b.array(arrayId, controllers);
+  b.array(arrayId, controllers, PatternBuilder.targetName(options.iqnPrefix, arrayId));
 
   const layout = storagePorts(cards, perCard);
   const perFabric = [0, 1].map((f) => controllerCount * Math.ceil((controllerPorts - f) / 2) + names.length * layout.filter((s) => s.fabric === f).length);

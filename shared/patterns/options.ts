@@ -17,7 +17,10 @@ export type PatternOptions = {
   controllers?: number;
   /** Data ports per controller; by default just enough for the pattern. */
   controllerPorts?: number;
-  /** Host initiator names become `<iqnPrefix>:<host name>`, e.g. iqn.2026-01.example.tidewater. */
+  /**
+   * Host initiator names become `<iqnPrefix>:<host name>`, e.g. iqn.2026-01.example.tidewater, and
+   * the array's target name `<iqnPrefix>:storage.<array name>`.
+   */
   iqnPrefix?: string;
   chap?: ChapMode;
   /** Put static addresses on every port that has a network (default true). */

@@ -10,7 +10,7 @@ import {
 
 /**
  * Rack geometry for the rack view, the rack rules and the cable-length estimate. Units are counted
- * from the bottom of the rack, 1-based (topology-format.md); 1U = 1.75 in = 44.45 mm (EIA-310-D /
+ * from the bottom of the rack, 1-based (docs/topology-format.md); 1U = 1.75 in = 44.45 mm (EIA-310-D /
  * IEC 60297). Everything the format leaves optional falls back to the format's defaults here, and
  * only here, so a document is never rewritten to hold them.
  */

@@ -4,7 +4,7 @@ import type { CableSchedule, ScheduleRow } from '@/shared/schedule/types';
 
 /**
  * The build sheet as tables — a header and rows of plain cells — for the CSV and spreadsheet
- * exports (api.md fixes the CSV headers). Absent values are empty cells (null).
+ * exports (docs/api.md fixes the CSV headers). Absent values are empty cells (null).
  */
 export type Cell = string | number | null;
 export type Table = { header: readonly string[]; rows: Cell[][] };

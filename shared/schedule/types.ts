@@ -1,7 +1,7 @@
 import type { Media } from '@/shared/topology/schema';
 
 /**
- * The cable schedule as api.md's `GET …/versions/:n/cables` answers it. Plain JSON: every absent
+ * The cable schedule as docs/api.md's `GET …/versions/:n/cables` answers it. Plain JSON: every absent
  * value is null, so the same rows go over the wire, into CSV and into the spreadsheet.
  */
 export type ScheduleEnd = {

@@ -10,7 +10,7 @@ import {
 } from '@/shared/topology/schema';
 
 /**
- * Format 1 → format 2, on read (topology-format.md): pure, deterministic, and never written back over
+ * Format 1 → format 2, on read (docs/topology-format.md): pure, deterministic, and never written back over
  * a stored version. Each distinct non-empty `rack` text becomes a rack with that name (in order of
  * first use, `heightU` 42); a device with both `rack` and `ru` gets `placement: {rackId, ru,
  * heightU}` with its kind's default height (array 2, switch 1, host 1). Format 1 had no rows,

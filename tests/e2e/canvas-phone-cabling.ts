@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { expect, type Locator, type Page } from '@playwright/test';
 
-/** The demo's version 1 (product.md): cam-rec-2 is cabled to fab-a only, so fab-a is a single point of failure for it. */
+/** The demo's version 1 (docs/demo.md): cam-rec-2 is cabled to fab-a only, so fab-a is a single point of failure for it. */
 export function harborRoadV1(): unknown {
   return JSON.parse(readFileSync(join(process.cwd(), 'shared/fixtures/harbor-road-v1.json'), 'utf8'));
 }

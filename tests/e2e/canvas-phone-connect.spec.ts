@@ -10,7 +10,7 @@ test('on a phone: cam-rec-2 gets its second cable through "Connect to…" in fou
   await signIn(page, 'ravi@tidewater.example');
   await openEditor(page, await createVersionOneCopy(page, 'Harbor Road, one cable short'));
   await analysisSettled(page);
-  // Version 1: fab-a, card-1 and cable HR-A-10 each cut cam-rec-2 off (product.md's deliberate flaw).
+  // Version 1: fab-a, card-1 and cable HR-A-10 each cut cam-rec-2 off (docs/demo.md's deliberate flaw).
   await expect(page.getByTestId('spof-mark-cable-a-10')).toHaveCount(1);
   await expect(page.getByTestId('device-cam-rec-2')).toHaveAttribute('aria-label', /single point of failure|sessions/);
   const finger = fingerTaps(page);

@@ -1,7 +1,7 @@
 import { expect, type Page, type TestInfo } from '@playwright/test';
 import type { Role } from '@/shared/roles';
 
-/** The demo team's accounts (product.md); every one uses the README's demo password. */
+/** The demo team's accounts (docs/demo.md); every one uses the README's demo password. */
 export const DEMO_PASSWORD = 'harbor-road-demo';
 export const DEMO_ACCOUNTS: { email: string; name: string; role: Role }[] = [
   { email: 'maya@tidewater.example', name: 'Maya Okafor', role: 'admin' },

@@ -21,7 +21,7 @@ test("the demo's flawed version 1 names cam-rec-2's single points of failure and
 
   const spofs = page.getByTestId('report-host-cam-rec-2-spofs');
   await expect(spofs).toContainText(`Single points of failure (${camRec2.singlePointsOfFailure.length})`);
-  // product.md: cam-rec-2 is cabled only to fab-a, through its first card.
+  // docs/demo.md: cam-rec-2 is cabled only to fab-a, through its first card.
   await expect(spofs).toContainText('switch fab-a');
   await expect(spofs).toContainText('card-1 of cam-rec-2');
   await expect(spofs).toContainText(/cable HR-A-10 \(cam-rec-2 card-1 p1 → fab-a p\d+\)/);

@@ -12,7 +12,7 @@ test.describe('signing in', () => {
       await expectShell(page, testInfo);
       await expect(page.getByTestId('team-name')).toHaveText(DEMO_TEAM);
       await expect(page.getByTestId('signed-in-user')).toContainText(account.name);
-      // Team and Mailbox are for admins only (api.md role table).
+      // Team and Mailbox are for admins only (docs/api.md role table).
       const adminOnly = account.role === 'admin' ? 1 : 0;
       await expect(page.getByTestId('nav-team')).toHaveCount(adminOnly);
       await expect(page.getByTestId('nav-mailbox')).toHaveCount(adminOnly);

@@ -76,7 +76,7 @@ describe('bodies the server cannot read', () => {
     const admin = await signInAs(t.app, 'admin');
     const big = JSON.stringify({ email: 'a@tidewater.example', role: 'designer', padding: 'x'.repeat(11 * 1024 * 1024) });
     const res = await admin.post('/api/team/invitations').set('Content-Type', 'application/json').send(big);
-    // RFC 9110 §15.5.14: 413 Content Too Large; api.md: documents up to 10 MB.
+    // RFC 9110 §15.5.14: 413 Content Too Large; docs/api.md: documents up to 10 MB.
     expect(res.status).toBe(413);
     expect(res.body).toEqual({ error: 'The request body is larger than 10 MB.' });
   });

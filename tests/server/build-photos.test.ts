@@ -8,7 +8,7 @@ import { makeTestApp, signInAs, type Agent, type TestApp } from './helpers/app';
 import { buildPath, JPEG_8X8, jpegWithLocation, newClientId, PNG_8X8, WEBP_1X1 } from './helpers/build';
 import { designId, signInQuaysideAdmin } from './helpers/designs';
 
-/** Photo uploads to the approved Harbor Road v2 and reading them back (api.md). */
+/** Photo uploads to the approved Harbor Road v2 and reading them back (docs/api.md). */
 let t: TestApp;
 let id: number;
 let ines: Agent;

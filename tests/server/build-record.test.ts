@@ -101,7 +101,7 @@ describe('cable marks', () => {
 
   it('gives progress per rack: a cable between racks counts in both', async () => {
     const build = await record();
-    // Counted by hand from product.md's room: A01 holds vault-1, fab-a, oob-1, wms-db-1, wms-app-1 and cam-rec-1;
+    // Counted by hand from docs/demo.md's room: A01 holds vault-1, fab-a, oob-1, wms-db-1, wms-app-1 and cam-rec-1;
     // A02 fab-b, wms-db-2, wms-app-2 and cam-rec-2. A01: the array's 10 cables, its hosts' 9, and the A02 hosts'
     // cables to fab-a and oob-1 (6) = 25. A02: the array's 4 to fab-b, the A01 hosts' 3 to fab-b, its hosts' 9 = 16.
     expect(build.progress.racks.map((r: { rack: string; cables: { total: number } }) => [r.rack, r.cables.total])).toEqual([

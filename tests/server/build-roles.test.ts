@@ -4,7 +4,7 @@ import { buildPath, JPEG_8X8, newClientId } from './helpers/build';
 import { designId, signInQuaysideAdmin } from './helpers/designs';
 
 /**
- * The role table of every site-work route (api.md): anonymous 401; a role that may not do it 403;
+ * The role table of every site-work route (docs/api.md): anonymous 401; a role that may not do it 403;
  * another team 404; an installer asking for a version that is not approved 404 (as for reading it);
  * an admin marking a version that is not approved 409 (a request in the wrong review state).
  * The demo: Harbor Road v1 was sent back (changes asked), v2 is approved; Sam and Quinn are Quayside's.

@@ -8,7 +8,7 @@ import { makeTestApp, signInAs, type Agent, type DemoWho, type TestApp } from '.
 import { designId, harborV2, saveOnTop } from './helpers/designs';
 
 /**
- * The build sheet routes (api.md): cables JSON, cables.csv, addresses.csv, cables.xlsx. The seeded
+ * The build sheet routes (docs/api.md): cables JSON, cables.csv, addresses.csv, cables.xlsx. The seeded
  * demo: Harbor Road v1 (changes asked) and v2 (approved), Tidewater's; Sam is on another team.
  */
 let t: TestApp;
@@ -84,7 +84,7 @@ describe('the cable schedule route', () => {
 });
 
 describe('CSV exports', () => {
-  it('cables.csv: the api.md header, one row per cable, and parsed back it equals the rows', async () => {
+  it('cables.csv: the docs/api.md header, one row per cable, and parsed back it equals the rows', async () => {
     const res = await ravi().get(`/api/designs/${id}/versions/2/cables.csv`).expect(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?harbor-road-storage-v2-cables\.csv"?$/);

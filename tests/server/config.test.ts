@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { ConfigError, EXPO_DEV_ORIGIN, loadConfig } from '@/server/config';
 
-const PROD = { NODE_ENV: 'production', SESSION_SECRET: 'k'.repeat(32), APP_URL: 'https://cablewright.example' };
+const PROD = { NODE_ENV: 'production', SESSION_SECRET: 'k'.repeat(32), APP_URL: 'https://cablewright.example', SECRETS_KEY: 'ab'.repeat(32) };
 
 function problems(env: Record<string, string>): string[] {
   try {
@@ -14,7 +14,7 @@ function problems(env: Record<string, string>): string[] {
 }
 
 describe('server configuration from the environment', () => {
-  it('uses the api.md defaults outside production', () => {
+  it('uses the docs/api.md defaults outside production', () => {
     const config = loadConfig({});
     expect(config.port).toBe(8080);
     expect(config.databasePath).toBe('data/cablewright.sqlite');

@@ -8,7 +8,7 @@ import { createPasswords } from '@/server/services/passwords';
 import { makeTestApp, signInAs, type Agent, type TestApp } from './helpers/app';
 import { designId, harborV1, harborV2, QUAYSIDE_LAB } from './helpers/designs';
 
-/** The seeded demo scenario (product.md): what every role sees on first sign-in. */
+/** The seeded demo scenario (docs/demo.md): what every role sees on first sign-in. */
 let t: TestApp;
 let theo: Agent;
 let id: number;
@@ -54,10 +54,10 @@ describe('the seeded Harbor Road design', () => {
     const { report, summary } = (await theo.get(`/api/designs/${id}/versions/1/report`).expect(200)).body;
     const camRec2 = report.hosts.find((h: { host: string }) => h.host === 'cam-rec-2');
     expect(camRec2.redundant).toBe(false);
-    // Cabled only to fab-a: that switch, the one cabled card and its cable each cut it off (product.md's flaw).
+    // Cabled only to fab-a: that switch, the one cabled card and its cable each cut it off (docs/demo.md's flaw).
     expect(camRec2.singlePointsOfFailure).toEqual(expect.arrayContaining(['fab-a', 'cam-rec-2.card-1']));
     const mgmt = report.findings.find((f: { rule: string }) => f.rule === 'management-port-on-data-switch');
-    // Management ports belong on an out-of-band network, never on a data switch (product.md; common practice).
+    // Management ports belong on an out-of-band network, never on a data switch (docs/demo.md; common practice).
     expect(mgmt).toMatchObject({ severity: 'error', subjects: expect.arrayContaining(['vault-1.ctl-b.mgmt', 'fab-b']) });
     expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
     expect(summary.singlePointsOfFailure).toBeGreaterThan(0);

@@ -4,12 +4,12 @@ import { signInAs, type Agent, type DemoWho, type TestApp, makeTestApp } from '.
 import { designId, harborV2, latestOf, saveAndSubmit, saveOnTop, signInQuaysideAdmin } from './helpers/designs';
 
 /**
- * api.md's role table for every design and version route, for each role, signed out, and an admin of
+ * docs/api.md's role table for every design and version route, for each role, signed out, and an admin of
  * another team (who may do everything in their own team, so a refusal can only come from the team check).
  *
  * Status semantics (RFC 9110): 200 §15.3.1, 201 §15.3.2, 401 §15.5.2 (no credentials), 403 §15.5.4
  * (known but not allowed), 404 §15.5.5 — also for another team's design and for an installer asking
- * for a version that is not approved, so neither existence is revealed (api.md).
+ * for a version that is not approved, so neither existence is revealed (docs/api.md).
  */
 type Who = 'anonymous' | 'admin' | 'designer' | 'reviewer' | 'installer' | 'otherTeam';
 const WHO: Who[] = ['anonymous', 'admin', 'designer', 'reviewer', 'installer', 'otherTeam'];
@@ -138,7 +138,7 @@ describe('another team’s design answers exactly like a design that does not ex
       const [, missingPath] = missing[i];
       const a = await quinn[method](path).send(body);
       const b = await quinn[method](missingPath).send(body);
-      // RFC 9110 §15.5.5: 404 Not Found, and api.md: never reveal which.
+      // RFC 9110 §15.5.5: 404 Not Found, and docs/api.md: never reveal which.
       expect([path, a.status]).toEqual([path, 404]);
       expect(a.body).toEqual(b.body);
     }

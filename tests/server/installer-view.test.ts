@@ -2,7 +2,7 @@ import { makeTestApp, signInAs, type Agent, type TestApp } from './helpers/app';
 import { designId, harborV2, saveAndSubmit } from './helpers/designs';
 
 /**
- * Installers see approved versions only (api.md). Decided here: a version that is not approved
+ * Installers see approved versions only (docs/api.md). Decided here: a version that is not approved
  * answers 404, exactly like one that does not exist; a design without an approved version is not
  * listed and answers 404; to an installer a design they can open reads as approved, and its latest
  * version is its newest approved one. (RFC 9110 §15.5.5: a 404 need not say whether the thing exists.)

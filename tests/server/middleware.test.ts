@@ -37,7 +37,7 @@ describe('role guards', () => {
     await request(app).get('/thing').set('x-test-role', 'admin').expect(200);
   });
 
-  it('requireCapability follows the shared role table (api.md: only admins and designers edit designs)', async () => {
+  it('requireCapability follows the shared role table (docs/api.md: only admins and designers edit designs)', async () => {
     const app = guarded(requireCapability('editDesigns'));
     const statuses = [];
     for (const role of ['admin', 'designer', 'reviewer', 'installer']) {

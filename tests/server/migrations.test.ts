@@ -12,7 +12,7 @@ beforeEach(async () => {
 });
 afterEach(() => sequelize.close());
 
-const ALL_TABLES = ['SequelizeMeta', 'build_completions', 'build_marks', 'build_photos', 'build_step_marks', 'design_versions', 'designs', 'invitations', 'review_events', 'sessions', 'teams', 'users'];
+const ALL_TABLES = ['SequelizeMeta', 'build_completions', 'build_marks', 'build_photos', 'build_step_marks', 'chap_secret_reveals', 'chap_secrets', 'design_versions', 'designs', 'invitations', 'review_events', 'sessions', 'teams', 'users'];
 const tables = async () => (await sequelize.getQueryInterface().showAllTables()).sort();
 
 describe('database migrations', () => {

@@ -26,7 +26,7 @@ describe('e-mails of the review steps', () => {
     expect(mail[0].subject).toBe(`Please review Harbor Road storage, version ${n}`);
     expect(mail[0].text).toContain(`Ravi Menon has submitted version ${n} of "Harbor Road storage" (Harbor Road server room) for review.`);
     expect(mail[0].text).toContain(`${APP}/designs/${id}/versions/${n}/report`);
-    // harbor-road v1's analysis: cam-rec-2 not redundant (product.md's deliberate flaws).
+    // harbor-road v1's analysis: cam-rec-2 not redundant (docs/demo.md's deliberate flaws).
     expect(mail[0].text).toContain('5 of 6 hosts redundant, 2 errors, 2 warnings, 3 single points of failure');
     expect(mail[0].html).toContain(`href="${APP}/designs/${id}/versions/${n}/report"`);
   });

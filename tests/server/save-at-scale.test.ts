@@ -59,7 +59,7 @@ function saveInBackground() {
 }
 
 it('fits the body limit: the test is about a document the API takes', () => {
-  // api.md: documents up to 10 MB.
+  // docs/api.md: documents up to 10 MB.
   expect(Buffer.byteLength(BODY)).toBeLessThan(BODY_LIMIT_BYTES);
 });
 

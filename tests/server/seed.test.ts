@@ -14,7 +14,7 @@ beforeEach(async () => {
 afterEach(() => sequelize.close());
 
 describe('the demo seed', () => {
-  it('creates the two demo teams and their five people (product.md) in an empty database', async () => {
+  it('creates the two demo teams and their five people (docs/demo.md) in an empty database', async () => {
     const outcome = await seedDemo(sequelize, passwords);
     expect(outcome.seeded).toBe(true);
     const { Team, User } = getModels(sequelize);

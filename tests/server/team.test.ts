@@ -67,7 +67,7 @@ describe('role guard on the team management routes', () => {
     async (who, method, path, body) => {
       const agent = await signInAs(t.app, who);
       const res = await agent[method](path).send(body);
-      // RFC 9110 §15.5.4: 403 Forbidden; api.md: team management is for admins.
+      // RFC 9110 §15.5.4: 403 Forbidden; docs/api.md: team management is for admins.
       expect(res.status).toBe(403);
       expect(res.body.error).toMatch(/Your role/);
     },

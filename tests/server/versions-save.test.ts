@@ -60,7 +60,7 @@ describe('creating a design', () => {
 });
 
 describe('listing and searching designs', () => {
-  it('answers the api.md fields with the latest version and its summary', async () => {
+  it('answers the docs/api.md fields with the latest version and its summary', async () => {
     const res = await ravi.get('/api/designs').expect(200);
     expect(res.body.designs).toEqual([
       {
@@ -182,7 +182,7 @@ describe('saving a version', () => {
     const id = await designId(t);
     const doc = { ...harborV2(), name: 'x'.repeat(11 * 1024 * 1024) };
     const res = await ravi.post(`/api/designs/${id}/versions`).send({ baseVersion: 2, message: 'Huge', document: doc });
-    // RFC 9110 §15.5.14: 413 Content Too Large; api.md: documents up to 10 MB.
+    // RFC 9110 §15.5.14: 413 Content Too Large; docs/api.md: documents up to 10 MB.
     expect(res.status).toBe(413);
     expect(res.body.error).toMatch(/10 MB/);
     await ravi.get(`/api/designs/${id}`).expect(200);

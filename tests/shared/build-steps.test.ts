@@ -28,18 +28,18 @@ describe('the order of the checklist', () => {
     expect(steps.slice(0, safety.length)).toEqual(safety);
     expect(safety.every((s) => s.caution)).toBe(true);
     const text = safety.map((s) => `${s.title} ${s.detail}`).join('\n');
-    expect(text).toMatch(/two people/); // check-values.md cautions: two-person lift
-    expect(text).toMatch(/stabilisers/); // check-values.md cautions: deploy stabilisers
-    expect(text).toMatch(/within its rating/); // check-values.md cautions: circuits and cords the equipment is rated for
-    expect(text).toMatch(/qualified electrician/); // check-values.md cautions
+    expect(text).toMatch(/two people/); // docs/trade-values.md cautions: two-person lift
+    expect(text).toMatch(/stabilisers/); // docs/trade-values.md cautions: deploy stabilisers
+    expect(text).toMatch(/within its rating/); // docs/trade-values.md cautions: circuits and cords the equipment is rated for
+    expect(text).toMatch(/qualified electrician/); // docs/trade-values.md cautions
     expect(text).toMatch(/IEC 60825-1 Class 1/); // IEC 60825-1: laser product classes
-    expect(text).toMatch(/never look into a fibre end/i); // check-values.md cautions
-    expect(text).toMatch(/backup/); // check-values.md cautions: live production storage
+    expect(text).toMatch(/never look into a fibre end/i); // docs/trade-values.md cautions
+    expect(text).toMatch(/backup/); // docs/trade-values.md cautions: live production storage
     expect(safety[0].detail).toMatch(/local electrical and building codes.*licensed practice/);
   });
 
   it('powers on the switches first, then expansion shelves, then the array and its ready indication, then the hosts', () => {
-    // common practice (check-values.md): switches → expansion shelves → array → hosts once the array reports ready.
+    // common practice (docs/trade-values.md): switches → expansion shelves → array → hosts once the array reports ready.
     const switches = ['oob-1', 'fab-a', 'fab-b'].map((s) => step('switch', s));
     const shelves = step('shelves', 'vault-1');
     const array = step('array', 'vault-1');
@@ -60,7 +60,7 @@ describe('the order of the checklist', () => {
     const management = steps.filter((s) => s.phase === 'management');
     expect(steps.slice(-management.length)).toEqual(management);
     expect(management.map((s) => s.deviceId)).toEqual(['vault-1', ...[...HARBOR_ROAD_HOSTS].sort()]);
-    // RFC 5737 §3 documentation range, from product.md's demo (management 192.0.2.0/24).
+    // RFC 5737 §3 documentation range, from docs/demo.md's demo (management 192.0.2.0/24).
     expect(step('management', 'vault-1').detail).toContain('ctl-a mgmt: 192.0.2.2/24 on management, VLAN 10, MTU 1500');
   });
 });
@@ -73,7 +73,7 @@ describe('each host', () => {
   });
 
   it('gives each data port its address, VLAN and MTU', () => {
-    // product.md's demo: fabric A 198.51.100.0/24 VLAN 110 MTU 9000; fabric B 203.0.113.0/24 VLAN 120 MTU 9000 (RFC 5737 §3).
+    // docs/demo.md's demo: fabric A 198.51.100.0/24 VLAN 110 MTU 9000; fabric B 203.0.113.0/24 VLAN 120 MTU 9000 (RFC 5737 §3).
     expect(step('host-port', 'wms-db-1.card-1.p1').detail).toBe('Set card-1 p1: 198.51.100.5/24 on fabric A, VLAN 110, MTU 9000.');
     expect(step('host-port', 'wms-db-1.card-2.p1').detail).toBe('Set card-2 p1: 203.0.113.5/24 on fabric B, VLAN 120, MTU 9000.');
     expect(byId.has(JSON.stringify(['host-port', 'wms-db-1.card-1.p2']))).toBe(false); // the spare port is not used
@@ -82,7 +82,7 @@ describe('each host', () => {
   it('discovers the portals of its fabrics on TCP 3260', () => {
     const detail = step('discovery', 'wms-db-1').detail;
     expect(detail).toContain('TCP port 3260'); // RFC 7143 §15: the iSCSI well-known port
-    // vault-1's eight data ports, two per controller on each fabric (product.md), each a portal address:3260.
+    // vault-1's eight data ports, two per controller on each fabric (docs/demo.md), each a portal address:3260.
     expect(detail.match(/\d+\.\d+\.\d+\.\d+:3260/g)).toHaveLength(8);
     expect(detail).toContain('198.51.100.1:3260');
     expect(detail).toContain('203.0.113.4:3260');
@@ -92,7 +92,7 @@ describe('each host', () => {
     for (const host of HARBOR_ROAD_HOSTS) {
       const login = step('login', host);
       expect(login.expectedSessions).toBe(plannedSessions(report, host));
-      // Hand count from product.md: each host has one port on each fabric, and vault-1 two ports per
+      // Hand count from docs/demo.md: each host has one port on each fabric, and vault-1 two ports per
       // controller on each fabric: 2 host ports × 4 same-subnet controller ports = 8 sessions.
       expect(login.expectedSessions).toBe(8);
       expect(login.title).toBe(`Log ${host} in: 8 sessions`);
@@ -106,7 +106,7 @@ describe('each host', () => {
     const v1Report = analyze(v1);
     const login = bringUpSteps(v1, v1Report).find((s) => s.id === JSON.stringify(['login', 'cam-rec-2']))!;
     expect(login.expectedSessions).toBe(plannedSessions(v1Report, 'cam-rec-2'));
-    // product.md: v1 cables cam-rec-2 to fab-a only, so its one fabric-A port meets the 4 fabric-A controller ports.
+    // docs/demo.md: v1 cables cam-rec-2 to fab-a only, so its one fabric-A port meets the 4 fabric-A controller ports.
     expect(login.expectedSessions).toBe(4);
   });
 

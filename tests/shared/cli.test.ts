@@ -82,6 +82,24 @@ describe('the analyze command', () => {
     expect(JSON.parse(result.out[0]).hosts.every((p: { redundant: boolean }) => !p.redundant)).toBe(true);
   });
 
+  it('adds afterOneFailure with --after-one, and takes PSU and feed ids in --failed', () => {
+    const doc = checked(harborRoadV2());
+    doc.powerFeeds = [{ id: 'feed-a', name: 'Feed A' }];
+    doc.devices.find((d) => d.id === 'fab-a')!.psus = [{ id: 'fab-a.psu1', name: 'PSU 1', feedId: 'feed-a' }];
+    const text = JSON.stringify(doc);
+    const result = run(['p.json', '--after-one'], { 'p.json': text });
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.out.join('\n'));
+    expect(report.afterOneFailure).toEqual(analyze(doc, { afterOne: true }).afterOneFailure);
+    expect(report.afterOneFailure.map((e: { failed: string }) => e.failed)).toEqual(expect.arrayContaining(['fab-a', 'fab-a.psu1', 'feed-a']));
+    // Without the option the report is as before.
+    expect('afterOneFailure' in JSON.parse(run(['p.json'], { 'p.json': text }).out.join('\n'))).toBe(false);
+    const failed = run(['p.json', '--failed=feed-a'], { 'p.json': text });
+    expect(JSON.parse(failed.out.join('\n'))).toEqual(analyze(doc, { failed: ['feed-a'] }));
+    // Losing the feed takes fab-a down: the what-if equals failing the switch itself.
+    expect(JSON.parse(failed.out.join('\n')).hosts).toEqual(analyze(doc, { failed: ['fab-a'] }).hosts);
+  });
+
   it('prints usage and exits 2 without files', () => {
     expect(run([], {})).toEqual({ code: 2, out: [], err: [USAGE] });
   });

@@ -3,7 +3,7 @@ import type { Report } from '@/shared/analysis/types';
 import { Draft } from './helpers/draft';
 import { twoFabrics } from './helpers/topologies';
 
-/** The data-path and session rules of resilience-analysis.md, one case each. */
+/** The data-path and session rules of docs/analysis.md, one case each. */
 const pair = (report: Report, host = 'h1', array = 'v') => report.hosts.find((p) => p.host === host && p.array === array);
 
 /** v.a.1 (na), v.a.2 (nb), v.b.1 (na), v.b.2 (nb) == fa ; h1 ==c1== fa, h1 ==c2== fa  — one switch, two networks */

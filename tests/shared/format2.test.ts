@@ -6,7 +6,7 @@ import { readTopologyText } from '@/lib/designs/read-document';
 import { Draft } from './helpers/draft';
 
 /**
- * Format 2 (topology-format.md): site, racks, power feeds, placements, PSUs and target names, every
+ * Format 2 (docs/topology-format.md): site, racks, power feeds, placements, PSUs and target names, every
  * one optional; references to racks and feeds resolve like any other; ids unique across all of it.
  *
  *   rack rk-1 (A, 1): fa U40 ; v U20–21 ; h1 U10     v ==v.a/v.b== fa == h1 (two cards)

@@ -1,7 +1,6 @@
-import { compileGraph } from '@/shared/analysis/compile';
+import { compileGraph, ANY_NETWORK } from '@/shared/analysis/compile';
 import { createContext } from '@/shared/analysis/context';
 import { DominatorSolver } from '@/shared/analysis/dominators';
-import { ANY_NETWORK } from '@/shared/analysis/compile';
 import { buildDataPathGraph } from '@/shared/analysis/graph';
 import { analyze } from '@/shared/analysis/analyze';
 import { managementSwitchInPath, oneSwitch, twoArrays } from './helpers/topologies';

@@ -3,7 +3,7 @@ import { Draft } from './helpers/draft';
 
 /**
  * mtu-mismatch is about data paths, and a data path runs from a host port to a controller port
- * (resilience-analysis.md). Jumbo frames of 9000 bytes are common practice for storage fabrics;
+ * (docs/analysis.md). Jumbo frames of 9000 bytes are common practice for storage fabrics;
  * a network without an MTU runs Ethernet's 1500 (RFC 894, erratum 570).
  */
 const mismatches = (doc: ReturnType<Draft['build']>) => analyze(doc).findings.filter((f) => f.rule === 'mtu-mismatch');

@@ -6,7 +6,7 @@ import { validateTopology } from '@/shared/topology/validate';
 import { Draft } from './helpers/draft';
 
 /**
- * Rack drafting mistakes are findings, never refusals (topology-format.md, format 2). Units are
+ * Rack drafting mistakes are findings, never refusals (docs/topology-format.md, format 2). Units are
  * EIA-310 units from the bottom, 1-based; a rack has 42 unless it says otherwise.
  *
  *   rack R (42U): v U20–21 (2U array) ; h1 U21 ; h2 U22 ; fa U42 ; fb U42–43 (2U switch)

@@ -8,7 +8,7 @@ import { Draft } from './helpers/draft';
 import { randomDesign } from './helpers/random-design';
 import * as T from './helpers/topologies';
 
-/** The rule ids resilience-analysis.md requires, with the severities it fixes, copied from the page. */
+/** The rule ids docs/analysis.md requires, with the severities it fixes, copied from the page. */
 const REQUIRED = [
   'single-point-of-failure', 'host-unreachable', 'one-controller-only',
   'management-port-on-data-switch', 'data-port-on-management-switch', 'management-data-bridge', 'shared-switch-in-use',
@@ -106,7 +106,7 @@ function idsOf(doc: Topology): Set<string> {
 }
 
 describe('the rule catalogue', () => {
-  it('holds every rule id resilience-analysis.md requires, with the severities it names', () => {
+  it('holds every rule id docs/analysis.md requires, with the severities it names', () => {
     expect(REQUIRED.filter((rule) => !(rule in RULES))).toEqual([]);
     for (const [rule, severity] of Object.entries(SEVERITY_IN_SPEC)) expect({ rule, severity: RULES[rule as keyof typeof RULES] }).toEqual({ rule, severity });
   });

@@ -1,8 +1,7 @@
 import { analyze } from '@/shared/analysis/analyze';
 import { reachOf } from '@/shared/rules/cables';
-import { REACH } from '@/shared/rules/limits';
+import { REACH, LIMITS } from '@/shared/rules/limits';
 import { checkIscsiName } from '@/shared/rules/iqn';
-import { LIMITS } from '@/shared/rules/limits';
 import type { Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 import { twoFabrics } from './helpers/topologies';
@@ -54,7 +53,7 @@ describe('cable reach against the published values', () => {
       ([, entry]) => !/(RFC \d+|IEEE 802|SFF-\d+|EIA-|TIA|common practice)/.test(entry.source),
     );
     expect(unsourced).toEqual([]);
-    // Clause numbers recalled rather than read are marked as such (check-values.md).
+    // Clause numbers recalled rather than read are marked as such (docs/trade-values.md).
     expect(reachOf('cat5e', 1)!.source).toContain('from memory');
   });
 

@@ -10,7 +10,7 @@ import oldV2 from './data/harbor-road-v2.format-1.json';
 import { mulberry32, randomDesign } from './helpers/random-design';
 
 /**
- * Format 1 → format 2 on read (topology-format.md). The format 1 files under tests/shared/data are
+ * Format 1 → format 2 on read (docs/topology-format.md). The format 1 files under tests/shared/data are
  * the Harbor Road demo as it was stored before format 2, kept to prove old versions still open.
  */
 function v1(doc: object): TopologyV1 {

@@ -97,6 +97,16 @@ export function setDevice(doc: Topology, args: SetDeviceArgs): Topology {
   return withPlacement(edited, deviceById(edited, args.id), { rack, ru: args.ru });
 }
 
+/** A controller's own target name, overriding its array's (format 2); null or empty removes it. */
+export function setControllerIqn(doc: Topology, args: { id: string; iqn: string | null }): Topology {
+  const kind = kindOf(doc, args.id);
+  if (kind !== 'controller') {
+    throw new CommandError(kind ? 'wrong-kind' : 'not-found', kind ? `"${args.id}" is a ${kind}; only a controller takes its own target name here.` : `There is nothing with the id "${args.id}" in this design.`, 'id');
+  }
+  const iqn = args.iqn === null || args.iqn.trim() === '' ? null : args.iqn.trim();
+  return mapGroups(doc, (g) => (g.id === args.id ? patch(g, { iqn }) : g));
+}
+
 export const deviceCommands = [
   command(
     'addDevice',
@@ -128,5 +138,11 @@ export const deviceCommands = [
       })
       .strict(),
     setDevice,
+  ),
+  command(
+    'setControllerIqn',
+    'Give a controller its own target name (IQN)',
+    z.object({ id: z.string().min(1), iqn: z.string().max(1000).nullable() }).strict(),
+    setControllerIqn,
   ),
 ];

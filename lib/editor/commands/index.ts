@@ -9,6 +9,7 @@ import { layoutCommands } from '@/lib/editor/commands/layout';
 import { networkCommands } from '@/lib/editor/commands/networks';
 import { patternCommands } from '@/lib/editor/commands/patterns';
 import { portCommands } from '@/lib/editor/commands/ports';
+import { powerCommands } from '@/lib/editor/commands/power';
 import { selectionCommands } from '@/lib/editor/commands/selection';
 import { CommandError, commandErrorFromZod } from '@/lib/editor/errors';
 
@@ -18,7 +19,7 @@ import { CommandError, commandErrorFromZod } from '@/lib/editor/errors';
  * first, so a bad call from anywhere becomes a CommandError with a field path, never a broken
  * document. Each command is also exported as a plain typed function for direct use.
  */
-const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands, ...assignNetworkCommands] as const;
+const ALL = [...deviceCommands, ...portCommands, ...cablingCommands, ...networkCommands, ...addressingCommands, ...layoutCommands, ...patternCommands, ...selectionCommands, ...assignNetworkCommands, ...powerCommands] as const;
 
 // `command()` widens names to string; the plain functions' names restore them for typed calls.
 type ArgsOf<F> = F extends (doc: Topology, args: infer A) => Topology ? A : never;

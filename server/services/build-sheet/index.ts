@@ -1,4 +1,5 @@
 import type { User } from '@/shared/api/auth';
+import { loginPlan, type LoginPlan } from '@/shared/handover/login-plan';
 import { cableSchedule, type CableSchedule } from '@/shared/schedule';
 import { addressTable, cableTable, exportFileName, materialsTable } from '@/shared/schedule/tables';
 import type { Models } from '@/server/models';
@@ -8,7 +9,7 @@ import { openVersionDocument } from './read';
 import { buildWorkbook, WorkbookTooSlowError } from './xlsx-pool';
 
 /**
- * The build sheet of a version (api.md): the cable schedule as JSON, the cable list and the address
+ * The build sheet of a version (docs/api.md): the cable schedule as JSON, the cable list and the address
  * worksheet as CSV, and all three tables (Cables, Addresses, Materials) as a workbook. Everyone who
  * may read the version may read these.
  *
@@ -46,6 +47,12 @@ export function createBuildSheetService({ models }: { models: Models }) {
       if (!opened.ok) return opened;
       const { doc, designName, number } = opened.value;
       return ok({ fileName: exportFileName(designName, number, 'addresses', 'csv'), contentType: CSV_TYPE, body: toCsv(addressTable(doc)) });
+    },
+
+    /** The login plan (shared/handover/login-plan.ts): per host, the portals and target names to log in to. */
+    async loginPlan(viewer: User, id: number, n: number): Promise<Result<LoginPlan>> {
+      const opened = await openVersionDocument(models, viewer, id, n);
+      return opened.ok ? ok(loginPlan(opened.value.doc)) : opened;
     },
 
     async cablesXlsx(viewer: User, id: number, n: number): Promise<Result<Download>> {

@@ -7,7 +7,7 @@ import { NO_SUCH_DESIGN, noSuchVersion } from '@/server/services/designs/message
 import { fail, ok, type Result } from '@/server/services/result';
 
 /**
- * A version's document for the build sheet, read as the role table allows (api.md): another team's
+ * A version's document for the build sheet, read as the role table allows (docs/api.md): another team's
  * design, and for an installer a version that is not approved, are 404 like one that does not exist.
  * Stored documents of any format come back as format 2; the stored text is not touched.
  */

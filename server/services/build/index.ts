@@ -14,7 +14,7 @@ import { storedHosts } from './stored-hosts';
 import { createVersionCache } from './version-cache';
 
 /**
- * Site work on a version (api.md): read its build record and history (every role that may read the
+ * Site work on a version (docs/api.md): read its build record and history (every role that may read the
  * version), mark cables and bring-up steps, attach and read photos (marks.ts, photos/).
  */
 export function createBuildServices(input: DesignDeps & { photos: PhotoStore }) {

@@ -15,7 +15,7 @@ type OpenDeps = { models: Models; versions: VersionCache };
 export type OpenedBuild = { view: DesignView; record: VersionRecord; doc: Topology };
 
 /**
- * The version `n` of design `id` as the viewer may read it (api.md's role table): another team's
+ * The version `n` of design `id` as the viewer may read it (docs/api.md's role table): another team's
  * design, and for an installer a version that is not approved, answer 404 like one that does not exist.
  */
 export async function openBuild({ models, versions }: OpenDeps, viewer: User, id: number, n: number): Promise<Result<OpenedBuild>> {
@@ -30,7 +30,7 @@ export async function openBuild({ models, versions }: OpenDeps, viewer: User, id
 /**
  * The same, for writing to the record: only an approved version takes marks and photos. Installers
  * never see other versions (404 above); an admin marking a version that is not approved is told
- * why with 409, the status api.md gives an action in the wrong review state.
+ * why with 409, the status docs/api.md gives an action in the wrong review state.
  */
 export async function openForMarking(deps: OpenDeps, viewer: User, id: number, n: number): Promise<Result<OpenedBuild>> {
   const opened = await openBuild(deps, viewer, id, n);

@@ -64,7 +64,7 @@ export async function listDesigns(sequelize: Sequelize, viewer: User, options: L
   const all = seesAllVersions(viewer);
   const filters = ['d."teamId" = :teamId'];
   const replacements: Record<string, unknown> = { teamId: viewer.teamId, limit: options.limit + 1 };
-  // Installers see only designs with an approved version (api.md's role table).
+  // Installers see only designs with an approved version (docs/api.md's role table).
   if (!all) filters.push(`EXISTS ${APPROVED_VERSION}`);
   const needle = options.q?.trim().toLocaleLowerCase();
   if (needle) {

@@ -19,7 +19,7 @@ export type DesignView = {
   people: Map<number, UserRow>;
 };
 
-/** Admins, designers and reviewers read every version; installers only approved ones (api.md's role table). */
+/** Admins, designers and reviewers read every version; installers only approved ones (docs/api.md's role table). */
 export function seesAllVersions(viewer: User): boolean {
   return can(viewer.role, 'readAllVersions');
 }

@@ -1,4 +1,4 @@
-/** Sentences the design services answer with; a missing and a foreign design read exactly the same (api.md). */
+/** Sentences the design services answer with; a missing and a foreign design read exactly the same (docs/api.md). */
 export const NO_SUCH_DESIGN = 'There is no such design in your team.';
 
 export function noSuchVersion(number: number): string {

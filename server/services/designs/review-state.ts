@@ -7,7 +7,7 @@ export const STATE_AFTER: Record<ReviewAction, ReviewState> = {
   'request-changes': 'changes-requested',
 };
 
-/** How a state reads in sentences and e-mails (product.md's words: draft / in review / approved / changes asked). */
+/** How a state reads in sentences and e-mails (docs/demo.md's words: draft / in review / approved / changes asked). */
 export const STATE_WORDS: Record<ReviewState, string> = {
   draft: 'a draft',
   'in-review': 'in review',

@@ -85,7 +85,7 @@ export function createReviewService(deps: DesignDeps) {
 
 /**
  * Four eyes: a 403 when `viewerId` saved this version, or any version of the design with the same
- * content. A 403 like the role checks (api.md: the person may not do this; someone else may), not
+ * content. A 403 like the role checks (docs/api.md: the person may not do this; someone else may), not
  * a 409: no change of the version's state would make it allowed.
  */
 function ownContent(all: readonly VersionRecord[], record: VersionRecord, viewerId: number): Failure | null {

@@ -160,6 +160,21 @@ export function createVersionService(deps: DesignDeps) {
     },
 
     /**
+     * afterOneFailure as JSON text: stored with the version when it was saved; for a version stored
+     * without it (saved before, or past the save's budget) computed in the analysis pool on each request.
+     */
+    async afterOne(viewer: User, id: number, n: number): Promise<Result<{ afterOneJson: string }>> {
+      const opened = await openVersion(models, viewer, id, n);
+      if (!opened.ok) return opened;
+      const { row } = opened.value.record;
+      const stored = await models.DesignVersion.findByPk(row.id, { attributes: ['id', 'afterOne'] });
+      if (stored?.afterOne) return ok({ afterOneJson: stored.afterOne });
+      const computed = await analysis.afterOne(await loadDocumentText(models, row.id));
+      if (!computed.ok && computed.kind === 'invalid') throw new Error(`stored version ${row.id} no longer validates: ${computed.message}`);
+      return computed;
+    },
+
+    /**
      * Everything the report screen shows, in one answer: `{design, version, report, summary}` (the
      * design as GET /api/designs/:id gives it, the version with its document as GET …/versions/:n,
      * the report and summary as GET …/report), assembled from stored text.

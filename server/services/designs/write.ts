@@ -37,6 +37,7 @@ export async function appendVersion(
       summary: JSON.stringify(input.prepared.summary),
       contentHash: input.prepared.hash,
       report: input.prepared.reportJson,
+      afterOne: input.prepared.afterOneJson,
       createdAt: input.at,
     },
     { transaction },

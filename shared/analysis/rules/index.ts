@@ -6,6 +6,7 @@ import { lengthFindings } from '@/shared/analysis/rules/lengths';
 import { namingFindings } from '@/shared/analysis/rules/naming';
 import { networkFindings } from '@/shared/analysis/rules/networks';
 import { portalFindings } from '@/shared/analysis/rules/portals';
+import { powerFindings } from '@/shared/analysis/rules/power';
 import { rackFindings } from '@/shared/analysis/rules/racks';
 import { separationFindings } from '@/shared/analysis/rules/separation';
 import { specialBlockFindings } from '@/shared/analysis/rules/special-blocks';
@@ -25,6 +26,7 @@ export const RULE_GROUPS: RuleGroup[] = [
   duplicateNameFindings,
   rackFindings,
   lengthFindings,
+  powerFindings,
 ];
 
 /** Every rule id the analysis can report, with its severity — for filters and legends in the UI. */
@@ -73,6 +75,8 @@ export const RULES = {
   'device-name-duplicate': 'error',
   'part-name-duplicate': 'warning',
   'port-name-duplicate': 'warning',
+  'psu-no-feed': 'warning',
+  'psus-one-feed': 'warning',
 } as const;
 
 export type RuleId = keyof typeof RULES;

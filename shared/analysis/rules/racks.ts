@@ -5,7 +5,7 @@ import { aboveTop, rackContents, unitClashes, type Occupant } from '@/shared/rac
 import { displayName } from '@/shared/topology/index';
 
 /**
- * Rack drafting mistakes (topology-format.md, format 2): two devices in the same rack units, and a
+ * Rack drafting mistakes (docs/topology-format.md, format 2): two devices in the same rack units, and a
  * device reaching above the top of its rack. Findings rather than refusals, so a half-placed draft
  * can be saved; both stop the build as drawn, so both are errors. Units follow EIA-310: counted from
  * the bottom, 1-based.

@@ -8,7 +8,7 @@ import type { Finding, HostArrayResult } from '@/shared/analysis/types';
 const LISTED_UNITS = 4;
 
 // Messages name the biggest units first: a switch explains more than the cable that leads to it.
-const KIND_ORDER: Record<string, number> = { switch: 0, controller: 1, adapter: 2, cable: 3 };
+const KIND_ORDER: Record<string, number> = { feed: 0, switch: 1, controller: 2, psu: 3, adapter: 4, cable: 5 };
 
 function unitList(ctx: AnalysisContext, ids: string[]): string {
   const rank = (id: string) => KIND_ORDER[unitKindOf(ctx, id) ?? 'cable'];

@@ -72,3 +72,26 @@ export function syntheticDesign(hostCount: number): Topology {
   }
   return { format: TOPOLOGY_FORMAT, name: `synthetic ${hostCount}`, devices, cables, networks, security: { chap: 'mutual' } };
 }
+
+/**
+ * The same design with power (format 2): two feeds, and two PSUs on every device, one on each feed;
+ * every 100th host has a single PSU, on feed A, and one switch of each fabric has both PSUs on
+ * feed A, so power shows up among the single points of failure and in the after-one exposure.
+ */
+export function syntheticPoweredDesign(hostCount: number): Topology {
+  const doc = syntheticDesign(hostCount);
+  doc.powerFeeds = [
+    { id: 'feed-a', name: 'Feed A' },
+    { id: 'feed-b', name: 'Feed B' },
+  ];
+  let hosts = 0;
+  for (const device of doc.devices) {
+    const one = device.kind === 'host' && hosts++ % 100 === 99;
+    const shared = device.id === 'edge-a-1' || device.id === 'edge-b-2';
+    device.psus = [
+      { id: `${device.id}.psu1`, name: 'PSU 1', feedId: 'feed-a' },
+      ...(one ? [] : [{ id: `${device.id}.psu2`, name: 'PSU 2', feedId: shared ? 'feed-a' : 'feed-b' }]),
+    ];
+  }
+  return doc;
+}

@@ -56,7 +56,7 @@ describe('designs screen', () => {
     expect(within(list).getByTestId('design-1-status')).toHaveTextContent('Approved v2');
     expect(within(list).getByTestId('design-2-status')).toHaveTextContent('Changes asked v1');
     expect(within(list).getByTestId('design-3-status')).toHaveTextContent('Draft');
-    // product.md: version 2 makes all six hosts redundant; version 1 leaves cam-rec-2 with single points.
+    // docs/demo.md: version 2 makes all six hosts redundant; version 1 leaves cam-rec-2 with single points.
     expect(within(list).getByTestId('design-1-latest')).toHaveTextContent(/Version 2.*6 of 6 hosts redundant · no errors/);
     const flawed = FLAWED.latestVersion!.summary;
     expect(within(list).getByTestId('design-2-latest')).toHaveTextContent(

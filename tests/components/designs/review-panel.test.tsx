@@ -15,7 +15,7 @@ function renderPanel(viewer: User, version: VersionSummary, latestNumber = versi
 
 const draft = versionSummary({ number: 2, doc: docs.v2 });
 const inReview = versionSummary({ number: 2, doc: docs.v2, state: 'in-review', events: [event(1, 'submit', people.designer, 'Ready for a look')] });
-// Version 1 of the demo has errors (product.md: cam-rec-2 on one switch, a management port on fab-b).
+// Version 1 of the demo has errors (docs/demo.md: cam-rec-2 on one switch, a management port on fab-b).
 const flawedInReview = versionSummary({ number: 1, doc: docs.v1, state: 'in-review', events: [event(1, 'submit', people.designer)] });
 
 beforeEach(() => post.mockReset());

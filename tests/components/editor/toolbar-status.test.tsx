@@ -21,7 +21,7 @@ describe('the editor status line', () => {
     const findings = analyze(doc).findings;
     const errors = findings.filter((f) => f.severity === 'error').length;
     const warnings = findings.filter((f) => f.severity === 'warning').length;
-    // product.md: version 1 has problems and warnings for the reviewer to find.
+    // docs/demo.md: version 1 has problems and warnings for the reviewer to find.
     expect(errors).toBeGreaterThan(0);
     expect(warnings).toBeGreaterThan(0);
     renderToolbar(doc, 1);

@@ -44,6 +44,29 @@ describe('the inspector', () => {
     expect(screen.getByTestId('inspector-iqn-error')).toHaveTextContent(finding.message);
   });
 
+  it('edits the array’s target name, suggests one from the hosts’ prefix, and lets a controller carry its own', () => {
+    open();
+    act(() => editorStore.getState().select(['vault-1']));
+    render(<Inspector />);
+    expect(screen.getByTestId('inspector-target-iqn').props.value).toBe('iqn.2026-01.example.tidewater:storage.vault-1');
+    // RFC 7143 §4.2.7.4: target names follow the same iqn rules as initiator names.
+    fireEvent.changeText(screen.getByTestId('inspector-target-iqn'), 'iqn.2026-13.example.tidewater:vault');
+    expect(screen.getByTestId('inspector-target-iqn-error')).toHaveTextContent('Not a valid iSCSI name: the month "13" is not 01–12.');
+    fireEvent.changeText(screen.getByTestId('inspector-target-iqn'), '');
+    fireEvent(screen.getByTestId('inspector-target-iqn'), 'blur');
+    expect(device('vault-1')).not.toHaveProperty('iqn');
+    fireEvent.press(screen.getByTestId('inspector-target-iqn-suggest'));
+    expect(device('vault-1')).toMatchObject({ iqn: 'iqn.2026-01.example.tidewater:storage.vault-1' });
+
+    act(() => editorStore.getState().select(['vault-1.ctl-b']));
+    fireEvent.changeText(screen.getByTestId('inspector-controller-iqn'), 'iqn.2026-01.example.tidewater:storage.vault-1.ctl-b');
+    fireEvent(screen.getByTestId('inspector-controller-iqn'), 'submitEditing');
+    const ctl = () => (device('vault-1') as { controllers: { id: string; iqn?: string }[] }).controllers.find((c) => c.id === 'vault-1.ctl-b')!;
+    expect(ctl().iqn).toBe('iqn.2026-01.example.tidewater:storage.vault-1.ctl-b');
+    act(() => editorStore.getState().undo());
+    expect(ctl()).not.toHaveProperty('iqn');
+  });
+
   it('sets the CHAP mode of the design and says the secrets are not stored, with the RFC’s lengths', () => {
     open();
     render(<Inspector />);

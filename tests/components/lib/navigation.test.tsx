@@ -1,11 +1,16 @@
 import { activeNavKey, navItemsFor, safeNextPath } from '@/lib/navigation';
 
 describe('navigation', () => {
-  it('gives admins all four destinations and other roles Designs and Account only', () => {
-    expect(navItemsFor('admin').map((i) => i.key)).toEqual(['designs', 'team', 'mailbox', 'account']);
-    for (const role of ['designer', 'reviewer', 'installer'] as const) {
+  it('gives admins every destination, installers Site work too, and the others Designs and Account only', () => {
+    expect(navItemsFor('admin').map((i) => i.key)).toEqual(['designs', 'site', 'team', 'mailbox', 'account']);
+    expect(navItemsFor('installer').map((i) => i.key)).toEqual(['designs', 'site', 'account']);
+    for (const role of ['designer', 'reviewer'] as const) {
       expect(navItemsFor(role).map((i) => i.key)).toEqual(['designs', 'account']);
     }
+  });
+
+  it('keeps a checklist reached from Site work under its own path', () => {
+    expect(activeNavKey('/site')).toBe('site');
   });
 
   it('keeps a message of the mailbox under Mailbox', () => {

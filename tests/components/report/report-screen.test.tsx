@@ -4,9 +4,12 @@ import { api } from '@/lib/api/client';
 import { createNamer } from '@/lib/report/names';
 import { analyze } from '@/shared/analysis/analyze';
 import { summarize } from '@/shared/analysis/summary';
+import { loginPlan } from '@/shared/handover/login-plan';
 import type { Topology } from '@/shared/topology/schema';
 import { designResponse, docs, people, versionDetail, versionSummary } from '../designs/helpers';
-import { renderWithClient } from '../helpers/render';
+import { createTestQueryClient, renderWithClient } from '../helpers/render';
+import { handoverKeys } from '@/lib/api/handover';
+import { secretKeys } from '@/lib/api/secrets';
 
 jest.mock('@/lib/api/client', () => require('../helpers/mock-client').clientModule());
 jest.mock('expo-router', () => ({ Link: ({ children }: { children: React.ReactNode }) => children }));
@@ -19,14 +22,22 @@ function serve(n: 1 | 2, doc: Topology = n === 1 ? docs.v1 : docs.v2) {
     if (path === `/api/designs/1/versions/${n}/report-page`) {
       return { design: designResponse([versionSummary({ number: n, doc })]).design, version: versionDetail({ number: n, doc }), report, summary: summarize(report, doc) };
     }
+    if (path === `/api/designs/1/versions/${n}/login-plan`) return loginPlan(doc);
+    if (path === `/api/designs/1/versions/${n}/after-one`) return { afterOneFailure: analyze(doc, { afterOne: true }).afterOneFailure };
     throw new Error(`unexpected request ${path}`);
   });
   return { doc, report };
 }
 
-function renderReport(n: 1 | 2, doc?: Topology) {
+function renderReport(n: 1 | 2, doc?: Topology, { fetchPlan = false } = {}) {
   const served = serve(n, doc);
-  renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer });
+  const client = createTestQueryClient();
+  // The login plan is a query of its own; tests that do not read it get it up front, so it never
+  // lands after they have finished (outside act).
+  if (!fetchPlan) client.setQueryData(handoverKeys.loginPlan(1, n), loginPlan(served.doc));
+  // The secrets card has its own test (secrets-card.test.tsx); here no secrets exist yet.
+  client.setQueryData(secretKeys.status(1), { status: { mode: served.doc.security?.chap ?? 'none', generatedAt: null, generatedBy: null, length: null, hosts: [], reveals: [] } });
+  renderWithClient(<ReportScreen id={1} n={n} />, { user: people.reviewer, client });
   return served;
 }
 
@@ -38,6 +49,7 @@ function cutOffBy(doc: Topology, failed: string[]): string[] {
 
 beforeEach(() => get.mockReset());
 
+
 describe('failure report', () => {
   it('heads the report with the saved summary: redundant hosts of all, errors, warnings, single points', async () => {
     const { doc, report } = renderReport(1);
@@ -47,11 +59,12 @@ describe('failure report', () => {
     expect(within(headline).getByTestId('report-headline-errors-value')).toHaveTextContent(String(summary.errors));
     expect(within(headline).getByTestId('report-headline-warnings-value')).toHaveTextContent(String(summary.warnings));
     expect(within(headline).getByTestId('report-headline-spof-value')).toHaveTextContent(String(summary.singlePointsOfFailure));
-    // product.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
+    // docs/demo.md: in version 1 only cam-rec-2 is not redundant, so five of six hosts are.
     expect(summary).toMatchObject({ hosts: 6, redundantHosts: 5 });
     expect(screen.queryByTestId('report-headline-simulated')).toBeNull();
-    // The screen's data comes in one request, not one each for the design, the version and the report.
-    expect(get.mock.calls.map((c) => c[0])).toEqual(['/api/designs/1/versions/1/report-page']);
+    // The screen's data comes in one request, not one each for the design, the version and the report;
+    // the after-one analysis (megabytes on a large design) comes on its own for the maintenance view.
+    expect(get.mock.calls.map((c) => c[0]).sort()).toEqual(['/api/designs/1/versions/1/after-one', '/api/designs/1/versions/1/report-page']);
   });
 
   it("names cam-rec-2's single points of failure by device and port in version 1", async () => {
@@ -61,7 +74,7 @@ describe('failure report', () => {
     expect(expected.length).toBeGreaterThan(0);
     const namer = createNamer(doc);
     for (const unit of expected) expect(row).toHaveTextContent(namer.unit(unit), { exact: false });
-    // product.md: cam-rec-2 is cabled only to fab-a, through its first card.
+    // docs/demo.md: cam-rec-2 is cabled only to fab-a, through its first card.
     expect(row).toHaveTextContent(/switch fab-a/);
     expect(row).toHaveTextContent(/card-1 of cam-rec-2/);
     expect(row).toHaveTextContent(/cable HR-A-10 \(cam-rec-2 card-1 p1 → fab-a p\d+\)/);
@@ -91,7 +104,7 @@ describe('failure report', () => {
     fireEvent.press(screen.getByTestId('whatif-add-fab-a'));
     const impact = await screen.findByTestId('whatif-impact', {}, { timeout: 2000 });
     const lost = cutOffBy(doc, ['fab-a']);
-    expect(lost).toEqual(['cam-rec-2']); // product.md: cam-rec-2 hangs on fab-a alone
+    expect(lost).toEqual(['cam-rec-2']); // docs/demo.md: cam-rec-2 hangs on fab-a alone
     for (const host of lost) expect(within(impact).getByTestId(`whatif-lost-${host}`)).toHaveTextContent(`${host} would lose access to vault-1`);
     expect(screen.getByTestId('report-host-cam-rec-2-lost')).toHaveTextContent('Would lose access');
     const simulated = summarize(analyze(doc, { failed: ['fab-a'] }), doc);
@@ -147,5 +160,20 @@ describe('failure report', () => {
     // The hosts that still reach vault-1 are not listed as unreached.
     expect(screen.queryByTestId('report-unreached-wms-db-2')).toBeNull();
     expect(screen.getByTestId('report-host-wms-db-2')).toBeOnTheScreen();
+  });
+});
+
+describe('login plan on the report', () => {
+  it('shows each host of version 2 with the report’s session count and every portal on port 3260', async () => {
+    const { report } = renderReport(2, undefined, { fetchPlan: true });
+    expect(await screen.findByText('Failure report: Harbor Road storage, version 2')).toBeOnTheScreen();
+    for (const host of ['wms-db-1', 'cam-rec-2']) {
+      const sessions = report.hosts.filter((h) => h.host === host).reduce((sum, h) => sum + h.sessions, 0);
+      expect(await screen.findByTestId(`login-plan-${host}-sessions`)).toHaveTextContent(`${sessions} sessions expected`);
+      const lines = screen.getAllByTestId(new RegExp(`^login-plan-${host}-port-.*-target$`));
+      expect(lines).toHaveLength(sessions);
+      // iSCSI's registered TCP port is 3260 (RFC 7143 §15); vault-1's target name is the demo's.
+      for (const line of lines) expect(line).toHaveTextContent(/^\d+\.\d+\.\d+\.\d+:3260 → iqn\.2026-01\.example\.tidewater:storage\.vault-1 /);
+    }
   });
 });

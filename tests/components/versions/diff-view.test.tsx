@@ -34,7 +34,7 @@ describe('diff view', () => {
     const diff = serve();
     renderWithClient(<DiffScreen id={1} from={1} to={2} onPick={jest.fn()} />);
     const cables = await screen.findByTestId('diff-cables');
-    // product.md: version 2 cables cam-rec-2 card-2 to fab-b and moves ctl-b's management port to oob-1.
+    // docs/demo.md: version 2 cables cam-rec-2 card-2 to fab-b and moves ctl-b's management port to oob-1.
     const added = diff.cables.added.find((c) => c.changes.some((f) => String(f.after).includes('cam-rec-2')));
     const moved = diff.cables.changed.find((c) => c.changes.some((f) => String(f.after).includes('oob-1')));
     expect(added && moved).toBeTruthy();
@@ -50,7 +50,7 @@ describe('diff view', () => {
     const diff = serve();
     renderWithClient(<DiffScreen id={1} from={1} to={2} onPick={jest.fn()} />);
     await screen.findByTestId('diff-headline');
-    // product.md: version 2 turns on mutual CHAP.
+    // docs/demo.md: version 2 turns on mutual CHAP.
     expect(screen.getByTestId('diff-document')).toHaveTextContent(/CHAP: none → mutual/);
     for (const section of ['devices', 'groups', 'ports', 'networks', 'addresses'] as const) {
       const counts = diff.counts[section];

@@ -26,7 +26,7 @@ describe('read-only version view', () => {
     const devices = await screen.findByTestId('version-devices');
     for (const device of docs.v2.devices) expect(within(devices).getByTestId(`device-${device.id}`)).toBeOnTheScreen();
     expect(within(devices).getByTestId('port-cam-rec-2.card-2.p1')).toHaveTextContent(/fabric B/);
-    // product.md: version 2 cables cam-rec-2's card-2 to fab-b.
+    // docs/demo.md: version 2 cables cam-rec-2's card-2 to fab-b.
     expect(within(devices).getByTestId('port-cam-rec-2.card-2.p1')).toHaveTextContent(/→ fab-b p\d+/);
     expect(screen.getByTestId('version-tabs-cables')).toHaveTextContent(`Cables (${docs.v2.cables.length})`);
 
@@ -35,7 +35,7 @@ describe('read-only version view', () => {
     for (const cable of docs.v2.cables) expect(within(cables).getByTestId(`version-cables-${cable.id}`)).toHaveTextContent(new RegExp(cable.label!));
 
     fireEvent.press(screen.getByTestId('version-tabs-networks'));
-    // product.md: fabric B is 203.0.113.0/24 on VLAN 120 (RFC 5737 range).
+    // docs/demo.md: fabric B is 203.0.113.0/24 on VLAN 120 (RFC 5737 range).
     expect(screen.getByTestId('version-networks-net-fabric-b')).toHaveTextContent(/203\.0\.113\.0\/24.*120/);
   });
 });

@@ -55,7 +55,7 @@ describe('read-only document rows', () => {
     const p1 = vault.groups[0].ports[0];
     const cable = doc.cables.find((c) => c.a === 'vault-1.ctl-a.p1' || c.b === 'vault-1.ctl-a.p1')!;
     expect(p1).toMatchObject({ name: 'p1', role: 'data', network: 'fabric A', cabledTo: `fab-a p1 (${cable.label})` });
-    // product.md: fabric A is 198.51.100.0/24 (RFC 5737).
+    // docs/demo.md: fabric A is 198.51.100.0/24 (RFC 5737).
     expect(p1.address).toMatch(/^198\.51\.100\.\d+$/);
   });
 
@@ -64,7 +64,7 @@ describe('read-only document rows', () => {
     expect(rows).toHaveLength(doc.cables.length);
     expect(rows[0].media).toBe('Cat 6A copper');
     expect(rows[0].length).toBe(`${doc.cables[0].lengthM} m`);
-    // product.md: fabric A VLAN 110 MTU 9000; management VLAN 10 MTU 1500.
+    // docs/demo.md: fabric A VLAN 110 MTU 9000; management VLAN 10 MTU 1500.
     expect(networkRows(doc).map((n) => [n.name, n.vlan, n.mtu])).toEqual([
       ['fabric A', '110', '9000'],
       ['fabric B', '120', '9000'],

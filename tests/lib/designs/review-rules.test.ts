@@ -18,7 +18,7 @@ const reviewer = { id: 3, role: 'reviewer' as const };
 const admin = { id: 1, role: 'admin' as const };
 const installer = { id: 4, role: 'installer' as const };
 
-describe('review steps per role (api.md role table)', () => {
+describe('review steps per role (docs/api.md role table)', () => {
   it('lets designers and admins submit only the latest draft', () => {
     expect(reviewOptions(designer, version('draft', 2), 2).submit).toBe(true);
     expect(reviewOptions(admin, version('draft', 2), 2).submit).toBe(true);

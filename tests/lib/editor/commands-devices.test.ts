@@ -156,3 +156,19 @@ describe('deleting a mixed selection', () => {
     expect(refusal(() => apply(smallDesign(), 'deleteItems', { ids: ['array-1-ctl-a', 'array-1-ctl-b'] })).code).toBe('refused');
   });
 });
+
+describe('target names', () => {
+  it('gives an array a target name and a controller its own, and refuses one on a switch or a card', () => {
+    const named = apply(smallDesign(), 'setDevice', { id: 'array-1', iqn: ' iqn.2026-01.example.tidewater:storage.array-1 ' });
+    expect(device(named, 'array-1')).toMatchObject({ iqn: 'iqn.2026-01.example.tidewater:storage.array-1' });
+    const own = apply(named, 'setControllerIqn', { id: 'array-1-ctl-b', iqn: 'iqn.2026-01.example.tidewater:storage.array-1.b' });
+    const array = device(own, 'array-1');
+    expect(array.kind === 'array' && array.controllers.map((c) => c.iqn)).toEqual([undefined, 'iqn.2026-01.example.tidewater:storage.array-1.b']);
+    const cleared = apply(own, 'setControllerIqn', { id: 'array-1-ctl-b', iqn: '' });
+    const again = device(cleared, 'array-1');
+    expect(again.kind === 'array' && 'iqn' in again.controllers[1]).toBe(false);
+    expect(refusal(() => apply(named, 'setControllerIqn', { id: 'host-1-card-1', iqn: 'iqn.2026-01.example.tidewater:x' }))).toMatchObject({ code: 'wrong-kind', path: 'id' });
+    expect(refusal(() => apply(named, 'setControllerIqn', { id: 'nothing', iqn: null }))).toMatchObject({ code: 'not-found' });
+    expect(refusal(() => apply(named, 'setDevice', { id: 'switch-1', iqn: 'iqn.2026-01.example.tidewater:x' }))).toMatchObject({ code: 'wrong-kind' });
+  });
+});

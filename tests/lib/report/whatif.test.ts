@@ -10,7 +10,7 @@ const v2 = harborRoadV2();
 
 describe('what-if comparison', () => {
   it('reports cam-rec-2 cut off when fab-a fails in Harbor Road version 1', () => {
-    // product.md: version 1 cables cam-rec-2 only to fab-a.
+    // docs/demo.md: version 1 cables cam-rec-2 only to fab-a.
     const impacts = compareAccess(analyze(v1), analyze(v1, { failed: ['fab-a'] }));
     expect(hostsLosingAccess(impacts)).toEqual(['cam-rec-2']);
     // The other five hosts are cabled to both fabrics, so they keep fab-b alone: reduced, not lost.

@@ -37,10 +37,12 @@ export const PRODUCTION_ENV: Record<string, string> = {
   BCRYPT_COST: '10',
   SEED: 'none',
   APP_URL: 'https://cablewright.example',
+  // 32 bytes as hex (server/config.ts); production refuses to start without one.
+  SECRETS_KEY: '5e'.repeat(32),
 };
 export const PRODUCTION_ORIGIN = 'https://cablewright.example';
 
-/** The demo people by the role the tests sign in as (product.md's Tidewater team, plus Quayside's Sam). */
+/** The demo people by the role the tests sign in as (docs/demo.md's Tidewater team, plus Quayside's Sam). */
 export const DEMO = {
   admin: 'maya@tidewater.example',
   designer: 'ravi@tidewater.example',

@@ -4,7 +4,7 @@ import { harborV1 } from './designs';
 
 /**
  * Malformed topology documents for the bad-input tests: the demo's version 1 with one or a few
- * mutations of the kinds the schema must refuse (topology-format.md: wrong types, unknown keys,
+ * mutations of the kinds the schema must refuse (docs/topology-format.md: wrong types, unknown keys,
  * missing fields, duplicate ids, references to nothing, too few controllers, bad enum values,
  * malformed addresses), plus random JSON. Seeded, so a failure can be reproduced.
  */

@@ -6,7 +6,7 @@ import type { Cable, Topology } from '@/shared/topology/schema';
 import { validateTopology } from '@/shared/topology/validate';
 
 /**
- * Harbor Road (product.md's demo): version 1 has cam-rec-2 cabled only to fab-a and one controller's
+ * Harbor Road (docs/demo.md's demo): version 1 has cam-rec-2 cabled only to fab-a and one controller's
  * management port on fab-b; version 2 fixes both. Every expectation below is read off the two
  * committed fixtures, not off the diff's own output.
  */
@@ -36,7 +36,7 @@ describe('diff of the Harbor Road demo, version 1 to version 2', () => {
   const ids1 = new Set(v1.cables.map((c) => c.id));
   const ids2 = new Set(v2.cables.map((c) => c.id));
 
-  it("starts from the flaw product.md describes: cam-rec-2's storage cables reach fab-a only in version 1, both fabrics in version 2", () => {
+  it("starts from the flaw docs/demo.md describes: cam-rec-2's storage cables reach fab-a only in version 1, both fabrics in version 2", () => {
     expect(new Set(devicesOn(i1, v1.cables, 'cam-rec-2'))).toEqual(new Set(['fab-a', 'oob-1']));
     expect(new Set(devicesOn(i2, v2.cables, 'cam-rec-2'))).toEqual(new Set(['fab-a', 'fab-b', 'oob-1']));
   });

@@ -79,6 +79,18 @@ export class Draft {
     return this;
   }
 
+  /** A power feed of the room (format 2). */
+  feed(id: string): this {
+    (this.doc.powerFeeds ??= []).push({ id, name: id });
+    return this;
+  }
+
+  /** Give a device PSUs `<device>.psu1`, `.psu2`… on these feeds (undefined: on no feed). */
+  psus(deviceId: string, feeds: (string | undefined)[]): this {
+    this.device(deviceId).psus = feeds.map((feedId, i) => ({ id: `${deviceId}.psu${i + 1}`, name: `PSU ${i + 1}`, ...(feedId === undefined ? {} : { feedId }) }));
+    return this;
+  }
+
   /** Cable two ports; a switch id as `b` takes that switch's next free port. */
   link(a: string, b: string, extra: Partial<Cable> = {}): this {
     const cable: Cable = { id: `k${this.doc.cables.length + 1}`, a: this.resolve(a), b: this.resolve(b), media: 'cat6a', lengthM: 3, ...extra };

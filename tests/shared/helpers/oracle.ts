@@ -3,7 +3,7 @@ import type { Topology } from '@/shared/topology/schema';
 
 /**
  * The brute-force method the analysis must agree with, written straight from
- * resilience-analysis.md and sharing no code with it: count sessions by searching from every host
+ * docs/analysis.md and sharing no code with it: count sessions by searching from every host
  * data port, then fail each unit in turn and search everything again. Quadratic on purpose.
  */
 type PortInfo = {
@@ -32,7 +32,7 @@ function portsOf(doc: Topology): Map<string, PortInfo> {
 
 /** Host id → array id → sessions: nested Maps, so no id can be mistaken for a pair of others. */
 type Entry = { sessions: number; controllers: Set<string> };
-type Table = Map<string, Map<string, Entry>>;
+export type Table = Map<string, Map<string, Entry>>;
 
 function entryOf(table: Table, host: string, array: string): Entry {
   let arrays = table.get(host);
@@ -42,7 +42,7 @@ function entryOf(table: Table, host: string, array: string): Entry {
   return entry;
 }
 
-function sessionsTable(doc: Topology, failed: Set<string>): Table {
+export function sessionsTable(doc: Topology, failed: Set<string>): Table {
   const ports = portsOf(doc);
   const alive = (p: PortInfo) => !failed.has(p.unitId);
   const cablesAt = new Map<string, string[]>();

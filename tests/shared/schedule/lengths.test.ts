@@ -3,7 +3,7 @@ import type { Topology } from '@/shared/topology/schema';
 import { Draft } from '../helpers/draft';
 
 /**
- * Length estimates checked by hand on drawn rooms. Site defaults (topology-format.md): racks 600 mm
+ * Length estimates checked by hand on drawn rooms. Site defaults (docs/topology-format.md): racks 600 mm
  * apart centre to centre, rows 1200 mm apart, 0.5 m slack per cable.
  *
  *   row A:  A01 (position 1)   A02 (position 2)   A05 (position 5)

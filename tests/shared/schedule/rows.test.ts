@@ -7,7 +7,7 @@ import { validateTopology } from '@/shared/topology/validate';
 import { Draft } from '../helpers/draft';
 import { mulberry32 } from '../helpers/random-design';
 
-/** ANSI/TIA-606 style: `cabinet-RU:port` at each end, near end first, `/` between (check-values.md). */
+/** ANSI/TIA-606 style: `cabinet-RU:port` at each end, near end first, `/` between (docs/trade-values.md). */
 const PLACED_END = /^[^/:]+-\d{2,}:[^/]+$/;
 
 /** Each row's ends are the cable's two ports, by device, part and port name; the rack as placed. */
@@ -74,7 +74,7 @@ describe('the cable schedule', () => {
       media: 'cat6a',
       lengthM: 3,
       network: 'fabric A',
-      vlan: 110, // the demo's fabric A VLAN (product.md)
+      vlan: 110, // the demo's fabric A VLAN (docs/demo.md)
     });
   });
 

@@ -24,7 +24,7 @@ describe('CHAP off', () => {
     // RFC 7143 §9: without CHAP the target only checks the initiator name the initiator states (from memory)
     expect(finding.message).toContain('any initiator that presents an allowed initiator name can log in');
     expect(finding.message).toContain('easy to claim');
-    expect(finding.severity).toBe('warning'); // resilience-analysis.md: chap-off is a warning
+    expect(finding.severity).toBe('warning'); // docs/analysis.md: chap-off is a warning
   });
 });
 
@@ -149,7 +149,7 @@ describe('special-use blocks as storage networks', () => {
     const doc = harborRoadV2();
     const report = analyze(doc);
     const notes = report.findings.filter((f) => f.rule === 'network-documentation');
-    expect(notes).toHaveLength(3); // product.md: fabric A, fabric B and management from RFC 5737
+    expect(notes).toHaveLength(3); // docs/demo.md: fabric A, fabric B and management from RFC 5737
     for (const note of notes) {
       expect(note.severity).toBe('info');
       expect(note.message).toMatch(/meant for examples such as this one/);

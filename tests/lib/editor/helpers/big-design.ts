@@ -1,7 +1,6 @@
 import { runCommand } from '@/lib/editor/commands';
 import type { Topology } from '@/shared/topology/schema';
-import { blank } from '@/tests/lib/editor/helpers/editor';
-import { allPorts } from '@/tests/lib/editor/helpers/editor';
+import { blank, allPorts } from '@/tests/lib/editor/helpers/editor';
 
 /**
  * The canvas benchmark's size: 300 devices and 600 cables — 10 arrays, 40 data switches of 48
