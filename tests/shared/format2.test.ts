@@ -118,12 +118,4 @@ describe('format 2 documents', () => {
     expect(read).toEqual({ ok: true, fileName: 'roomy-v1.json', doc });
     expect(jsonFileText(read.ok && read.doc)).toBe(jsonFileText(doc));
   });
-
-  it('leaves power to later: PSUs and feeds change nothing in the analysis yet', () => {
-    const doc = roomy();
-    const bare = structuredClone(doc);
-    delete bare.powerFeeds;
-    for (const device of bare.devices) delete device.psus;
-    expect(analyze(doc)).toEqual(analyze(bare));
-  });
 });

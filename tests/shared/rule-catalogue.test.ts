@@ -80,7 +80,14 @@ function everyMistake(): Topology {
   d.place('fa', 'r2', 40).place('v', 'r2', 20).place('sh', 'r1', 40);
   // k2 (h1 → fa, 80 m of Category 6): shorter than the ~121 m estimate.
   // k5 (v.b.1 → sh, Category 6A, no length): ~121 m estimate, past 10GBASE-T's 100 m (IEEE 802.3an).
-  return d.build();
+  const doc = d.build();
+  // Power: sh's only PSU on no feed (psu-no-feed); fa's two PSUs on one feed (psus-one-feed). Common practice.
+  doc.powerFeeds = [{ id: 'feed-1', name: 'Feed 1' }];
+  for (const device of doc.devices) {
+    if (device.id === 'sh') device.psus = [{ id: 'sh-psu', name: 'PSU 1' }];
+    if (device.id === 'fa') device.psus = [{ id: 'fa-psu-1', name: 'PSU 1', feedId: 'feed-1' }, { id: 'fa-psu-2', name: 'PSU 2', feedId: 'feed-1' }];
+  }
+  return doc;
 }
 
 function everyFinding(): { doc: Topology; finding: Finding }[] {
@@ -93,9 +100,10 @@ function everyFinding(): { doc: Topology; finding: Finding }[] {
 }
 
 function idsOf(doc: Topology): Set<string> {
-  const ids = new Set<string>([...doc.cables.map((c) => c.id), ...doc.networks.map((n) => n.id), ...(doc.racks ?? []).map((r) => r.id)]);
+  const ids = new Set<string>([...doc.cables.map((c) => c.id), ...doc.networks.map((n) => n.id), ...(doc.racks ?? []).map((r) => r.id), ...(doc.powerFeeds ?? []).map((f) => f.id)]);
   for (const d of doc.devices) {
     ids.add(d.id);
+    for (const psu of d.psus ?? []) ids.add(psu.id);
     const groups = d.kind === 'array' ? d.controllers : d.kind === 'host' ? d.adapters : [d];
     for (const g of groups) {
       ids.add(g.id);
