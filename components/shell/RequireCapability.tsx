@@ -8,6 +8,6 @@ import { can, type Capability } from '@/shared/roles';
 export function RequireCapability({ capability, screen, children }: { capability: Capability; screen: string; children: ReactNode }) {
   const me = useMe();
   if (!me.data) return <SessionLoading />;
-  if (!can(me.data.role, capability)) return <NotAvailable screen={screen} role={me.data.role} />;
+  if (!can(me.data.role, capability)) return <NotAvailable screen={screen} role={me.data.role} capability={capability} />;
   return <>{children}</>;
 }
